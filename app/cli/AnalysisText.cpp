@@ -1,0 +1,197 @@
+#include "AnalysisText.h"
+
+#include "HazardCaution.h"
+#include "TextTable.h"
+#include "ValueParser.h"
+
+#include <cmath>
+#include <cstdio>
+#include <numbers>
+
+namespace tauline::cli {
+
+namespace {
+
+constexpr int kDigits = 4;
+
+std::string fixed(double value, int decimals)
+{
+    char buffer[64];
+    std::snprintf(buffer, sizeof buffer, "%.*f", decimals, value);
+    return buffer;
+}
+
+std::string general(double value)
+{
+    char buffer[64];
+    std::snprintf(buffer, sizeof buffer, "%.6g", value);
+    return buffer;
+}
+
+std::string describeResponse(const Network& network, const Analysis& a)
+{
+    const auto& r = network.response;
+    std::string unit = std::string(" (") + unitSymbol(a.kind) + ")";
+    switch (a.kind) {
+    case ResponseKind::Impedance:
+        return "impedance between " + r.input[0] + " and " + r.input[1] + unit;
+    case ResponseKind::VoltageGain:
+        return "voltage gain from " + r.input[0] + "/" + r.input[1] + " to " + r.output[0] + "/" + r.output[1] + unit;
+    case ResponseKind::Transimpedance:
+        return "transimpedance from current into " + r.input[0] + " (out of " + r.input[1] + ") to " + r.output[0] +
+               "/" + r.output[1] + unit;
+    }
+    return "";
+}
+
+std::string describeLimit(const ResponseLimit& limit, ResponseKind kind, const char* zeroMeaning,
+                          const char* infiniteMeaning)
+{
+    switch (limit.kind) {
+    case LimitKind::Finite: {
+        std::string text = formatQuantity(limit.value, unitSymbol(kind), kDigits);
+        if (limit.value != 0.0)
+            text += "  (" + fixed(20.0 * std::log10(std::fabs(limit.value)), 2) +
+                    (kind == ResponseKind::VoltageGain ? " dB)" : " dB\u03A9)");
+        return text;
+    }
+    case LimitKind::Zero: return std::string("0 (") + zeroMeaning + ")";
+    case LimitKind::Infinite: return std::string("infinite (") + infiniteMeaning + ")";
+    }
+    return "";
+}
+
+std::string rootText(std::complex<double> root)
+{
+    std::string text = formatEngineering(root.real(), kDigits);
+    if (root.imag() != 0.0)
+        text += " \u00B1 j" + formatEngineering(std::fabs(root.imag()), kDigits);
+    return text + " rad/s";
+}
+
+// A complex pair is shown once, as re ± j·im.
+void writeRoots(std::ostream& out, const char* label, const std::vector<std::complex<double>>& roots)
+{
+    out << label;
+    bool any = false;
+    for (const auto& root : roots) {
+        if (root.imag() < 0.0)
+            continue;
+        out << (any ? "\n" + std::string(displayWidth(label), ' ') : std::string()) << rootText(root);
+        if (std::abs(root) > 0.0)
+            out << "  (" << formatQuantity(std::abs(root) / (2.0 * std::numbers::pi), "Hz", kDigits) << ")";
+        else
+            out << "  (at the origin)";
+        any = true;
+    }
+    out << (any ? "\n" : "none\n");
+}
+
+std::string coefficients(const std::vector<double>& values)
+{
+    std::string text;
+    for (size_t i = 0; i < values.size(); ++i)
+        text += (i == 0 ? "" : ", ") + general(values[i]);
+    return text.empty() ? "none" : text;
+}
+
+std::string secondsOrInfinite(const std::optional<double>& value)
+{
+    return value ? formatQuantity(*value, "s", kDigits) : "\u221E";
+}
+
+std::string ohmsOrInfinite(const std::optional<double>& value)
+{
+    return value ? formatQuantity(*value, "\u03A9", kDigits) : "\u221E";
+}
+
+void writeTimeConstants(std::ostream& out, const Analysis& a)
+{
+    out << "\nTime constants (the other capacitors open; input zeroed | response nulled):\n";
+    if (a.timeConstants.empty()) {
+        out << "  none (no reactive parts)\n";
+        return;
+    }
+    TextTable table({"part", "\u03C4", "R seen", "\u03C4 null", "R null"});
+    for (const auto& tc : a.timeConstants) {
+        std::string nullState = nullTimeConstantState(a, tc);
+        bool undefined = nullState == "undefined";
+        table.addRow({tc.element, secondsOrInfinite(tc.tau), ohmsOrInfinite(tc.r),
+                      undefined ? "undefined" : secondsOrInfinite(tc.tauNull),
+                      undefined ? "undefined" : ohmsOrInfinite(tc.rNull)});
+    }
+    table.print(out);
+    if (a.kind != ResponseKind::Impedance && a.dc.kind != LimitKind::Finite)
+        out << "  (null time constants are undefined where the dc value is zero or infinite)\n";
+}
+
+void writePairTimeConstants(std::ostream& out, const Analysis& a)
+{
+    if (a.pairTimeConstants.empty())
+        return;
+    out << "\nPair time constants (a part's \u03C4 with another part shorted):\n";
+    TextTable table({"part", "shorted", "\u03C4", "R seen"});
+    for (const auto& pair : a.pairTimeConstants)
+        table.addRow({pair.element, pair.shorted, secondsOrInfinite(pair.tau), ohmsOrInfinite(pair.r)});
+    table.print(out);
+}
+
+void writeBreakpoints(std::ostream& out, const Analysis& a)
+{
+    out << "\nBreakpoints (exact, and estimated from the time-constant sums):\n";
+    if (a.breakpoints.empty()) {
+        out << "  none\n";
+        return;
+    }
+    TextTable table({"type", "exact", "estimate", "error", "q", ""});
+    bool anyPoor = false;
+    for (const auto& bp : a.breakpoints) {
+        std::string percent = fixed(100.0 * bp.estimateError, 1);
+        if (percent == "-0.0")
+            percent = "0.0";
+        std::string error = (percent[0] == '-' ? "" : "+") + percent + " %";
+        table.addRow({bp.type == RootType::Pole ? "pole" : "zero", formatQuantity(bp.hz, "Hz", kDigits),
+                      formatQuantity(bp.estimateHz, "Hz", kDigits), error, bp.q ? fixed(*bp.q, 3) : "",
+                      bp.poorlySeparated ? "*" : ""});
+        anyPoor = anyPoor || bp.poorlySeparated;
+    }
+    table.print(out);
+    if (anyPoor)
+        out << "  * estimate more than 10 % off: these corners are too close together for the\n"
+               "    time-constant estimate; trust the exact column.\n";
+}
+
+}  // namespace
+
+void writeAnalysisText(std::ostream& out, const AnalysedFile& file)
+{
+    const Network& network = file.loaded.network;
+    const Analysis& a = file.analysis;
+    if (!network.title.empty())
+        out << network.title << '\n';
+    out << "File:      " << file.path << '\n';
+    out << "Response:  " << describeResponse(network, a) << '\n';
+    out << "Order:     " << a.order << '\n';
+    out << "DC:        " << describeLimit(a.dc, a.kind, "blocked at dc", "rises without limit towards dc") << '\n';
+    out << "HF:        "
+        << describeLimit(a.hf, a.kind, "falls without limit at high frequency", "rises without limit at high frequency")
+        << '\n';
+    writeRoots(out, "Poles:     ", a.poles);
+    writeRoots(out, "Zeros:     ", a.zeros);
+    out << "Numerator (ascending powers of s):   " << coefficients(a.numerator) << '\n';
+    out << "Denominator (ascending powers of s): " << coefficients(a.denominator) << '\n';
+    writeTimeConstants(out, a);
+    writePairTimeConstants(out, a);
+    writeBreakpoints(out, a);
+
+    auto warnings = file.warnings();
+    if (!warnings.empty()) {
+        out << "\nWarnings:\n";
+        for (const auto& w : warnings)
+            out << "  - " << w << '\n';
+    }
+    if (file.needsCaution())
+        out << "\nCaution: " << hazardCautionText() << '\n';
+}
+
+}  // namespace tauline::cli

@@ -1,0 +1,55 @@
+#pragma once
+
+#include <Eigen/Dense>
+#include <complex>
+
+namespace tauline {
+
+// LU of a row- and column-scaled nodal matrix, with refinement. Conductances,
+// susceptances and source stamps differ by many decades: scaling first makes
+// the singularity test (reciprocal condition estimate) mean something, and
+// refining with the residual in extended precision recovers the digits plain
+// elimination loses to that spread.
+template <typename Scalar>
+class EquilibratedLu {
+public:
+    using Matrix = Eigen::Matrix<Scalar, Eigen::Dynamic, Eigen::Dynamic>;
+
+    explicit EquilibratedLu(const Matrix& a) : a_(a)
+    {
+        rowScale_ = a.cwiseAbs().rowwise().maxCoeff().cwiseInverse();
+        const Matrix rowScaled = rowScale_.asDiagonal() * a;
+        colScale_ = rowScaled.cwiseAbs().colwise().maxCoeff().transpose().cwiseInverse();
+        // An all-zero row or column is singular outright.
+        finiteScales_ = rowScale_.allFinite() && colScale_.allFinite();
+        if (finiteScales_)
+            lu_.compute(rowScaled * colScale_.asDiagonal());
+    }
+
+    bool regular() const { return finiteScales_ && lu_.rcond() > 1e-13; }
+
+    Matrix solve(const Matrix& rhs) const
+    {
+        using Extended = std::conditional_t<Eigen::NumTraits<Scalar>::IsComplex, std::complex<long double>, long double>;
+        using ExtendedMatrix = Eigen::Matrix<Extended, Eigen::Dynamic, Eigen::Dynamic>;
+        auto once = [&](const Matrix& b) -> Matrix {
+            return colScale_.asDiagonal() * lu_.solve(rowScale_.asDiagonal() * b);
+        };
+        const ExtendedMatrix aExt = a_.template cast<Extended>();
+        Matrix x = once(rhs);
+        for (int step = 0; step < 2; ++step) {
+            const ExtendedMatrix residual = rhs.template cast<Extended>() - aExt * x.template cast<Extended>();
+            x += once(residual.template cast<Scalar>());
+        }
+        return x;
+    }
+
+private:
+    Matrix a_;
+    Eigen::VectorXd rowScale_;
+    Eigen::VectorXd colScale_;
+    Eigen::PartialPivLU<Matrix> lu_;
+    bool finiteScales_ = true;
+};
+
+}  // namespace tauline

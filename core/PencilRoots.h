@@ -1,0 +1,37 @@
+#pragma once
+
+#include <Eigen/Dense>
+#include <complex>
+#include <vector>
+
+namespace tauline {
+
+// The finite roots s of det(A0 + s·P·diag(cap)·Pᵀ) = 0, the natural
+// frequencies of a nodal pencil whose reactive part has low rank.
+//
+// For a shift σ where A(σ) is regular, det A(s) = det A(σ)·det(I + (s−σ)·K)
+// with K = cap^½·Pᵀ·A(σ)⁻¹·P·cap^½ (capacitor-count square), so every finite
+// root is σ − 1/μ for an eigenvalue μ ≠ 0 of K. A root r comes out with
+// relative error that grows with its distance from σ: each root is
+// therefore taken from a shift just below it on a log grid spanning the
+// network's time scales, which keeps roots spread over many decades accurate.
+struct PencilRootProblem {
+    Eigen::MatrixXd a0;
+    Eigen::MatrixXd ports;        // P
+    Eigen::VectorXd capacitance;  // positive
+    bool symmetric = false;       // A0 symmetric: use the self-adjoint solver
+    double lowRate = 1.0;         // rad/s: below every non-zero root worth resolving
+    double highRate = 1.0;        // rad/s: above every finite root
+};
+
+struct PencilRoots {
+    std::vector<std::complex<double>> roots;  // finite, origin roots exactly 0
+};
+
+// Exactly `originRoots` roots, those nearest the origin, are set to 0: the
+// caller knows the multiplicity there better than rounding does (a double
+// root at 0 splits by √ε). With originRoots < 0, the cluster of roots far
+// below lowRate is taken as the origin's.
+PencilRoots finitePencilRoots(const PencilRootProblem& problem, int originRoots);
+
+}  // namespace tauline

@@ -1,0 +1,178 @@
+#include "CornerTable.h"
+
+#include "QuantityText.h"
+
+#include <QHeaderView>
+
+#include <cmath>
+
+namespace tauline::ui {
+
+namespace {
+
+QTableWidgetItem* cell(const QString& text, Qt::Alignment align = Qt::AlignLeft | Qt::AlignVCenter)
+{
+    auto* item = new QTableWidgetItem(text);
+    item->setFlags(Qt::ItemIsSelectable | Qt::ItemIsEnabled);
+    item->setTextAlignment(align);
+    return item;
+}
+
+QString typeText(const tauline::Breakpoint& corner)
+{
+    const bool pole = corner.type == tauline::RootType::Pole;
+    if (corner.q)
+        return (pole ? QObject::tr("pole pair, Q %1") : QObject::tr("zero pair, Q %1"))
+            .arg(*corner.q, 0, 'g', 3);
+    return pole ? QObject::tr("pole") : QObject::tr("zero");
+}
+
+QString sensitivityText(double s)
+{
+    QString number = QString::number(s, 'f', 2);
+    number.replace(QLatin1Char('-'), QChar(0x2212));
+    if (s > 0)
+        number.prepend(QLatin1Char('+'));
+    return number;
+}
+
+}  // namespace
+
+CornerTable::CornerTable(QWidget* parent) : QTableWidget(parent)
+{
+    setColumnCount(ColumnCount);
+    setHorizontalHeaderLabels({tr("Frequency"), tr("Type"), tr("Estimate"), tr("Error"),
+                               tr("Separation"), tr("Set by")});
+    horizontalHeaderItem(PartsColumn)->setToolTip(
+        tr("The parts with the largest normalised sensitivity d ln f / d ln x"));
+    horizontalHeaderItem(EstimateColumn)->setToolTip(
+        tr("From the time-constant sums (ratios of successive coefficients)"));
+    setSelectionBehavior(QAbstractItemView::SelectRows);
+    setSelectionMode(QAbstractItemView::SingleSelection);
+    setEditTriggers(QAbstractItemView::NoEditTriggers);
+    setAlternatingRowColors(true);
+    verticalHeader()->setVisible(false);
+    verticalHeader()->setDefaultSectionSize(fontMetrics().height() + 6);
+    horizontalHeader()->setStretchLastSection(true);
+    horizontalHeader()->setSectionResizeMode(QHeaderView::Interactive);
+    horizontalHeader()->setHighlightSections(false);
+    setColumnWidth(FrequencyColumn, 84);
+    setColumnWidth(TypeColumn, 72);
+    setColumnWidth(EstimateColumn, 84);
+    setColumnWidth(ErrorColumn, 62);
+    setColumnWidth(SeparationColumn, 84);
+    connect(this, &QTableWidget::itemSelectionChanged, this, &CornerTable::emitSelection);
+}
+
+void CornerTable::setAnalysis(const tauline::Analysis& analysis)
+{
+    const int keep = selectedCorner();
+    QSignalBlocker block(this);
+    clearContents();
+    const auto& corners = analysis.breakpoints;
+    setRowCount(static_cast<int>(corners.size()));
+    parts_.assign(corners.size(), {});
+    const Qt::Alignment right = Qt::AlignRight | Qt::AlignVCenter;
+    for (int row = 0; row < rowCount(); ++row) {
+        const auto& corner = corners[row];
+        auto* frequency = cell(frequencyText(corner.hz), right);
+        frequency->setData(HzRole, corner.hz);
+        setItem(row, FrequencyColumn, frequency);
+        auto* type = cell(typeText(corner));
+        type->setForeground(corner.type == tauline::RootType::Pole ? QColor(0x8a, 0x2c, 0x22)
+                                                                   : QColor(0x1f, 0x6a, 0x40));
+        setItem(row, TypeColumn, type);
+        auto* estimate = cell(frequencyText(corner.estimateHz), right);
+        estimate->setData(HzRole, corner.estimateHz);
+        setItem(row, EstimateColumn, estimate);
+        setItem(row, ErrorColumn, cell(percentText(corner.estimateError), right));
+        auto* separation = cell(corner.poorlySeparated ? tr("⚠ too close") : tr("ok"));
+        if (corner.poorlySeparated) {
+            separation->setForeground(QColor(0x9a, 0x5b, 0x00));
+            separation->setToolTip(tr("The corners lie too close together for the time-constant "
+                                      "estimate; read the exact frequency."));
+        } else {
+            separation->setForeground(QColor(0x70, 0x76, 0x80));
+        }
+        setItem(row, SeparationColumn, separation);
+        auto* parts = cell(QStringLiteral("…"));
+        parts->setForeground(QColor(0x70, 0x76, 0x80));
+        parts->setToolTip(tr("Working out which parts set this corner…"));
+        setItem(row, PartsColumn, parts);
+    }
+    if (keep >= 0 && keep < rowCount())
+        selectRow(keep);
+    block.unblock();
+    if (keep >= 0 && selectedCorner() != keep)
+        emit cornerSelected(-1, {});
+}
+
+void CornerTable::setSensitivities(const std::vector<tauline::CornerSensitivity>& sensitivities)
+{
+    const int rows = std::min<int>(rowCount(), static_cast<int>(sensitivities.size()));
+    for (int row = 0; row < rows; ++row) {
+        const auto dominant = tauline::dominantParts(sensitivities[row]);
+        QStringList names;
+        QStringList shown;
+        for (const auto& part : dominant) {
+            names << QString::fromStdString(part.part);
+            shown << QStringLiteral("%1 %2").arg(names.back(), sensitivityText(part.value));
+        }
+        QStringList all;
+        for (const auto& part : sensitivities[row].parts)
+            if (part.value != 0.0)
+                all << QStringLiteral("%1: %2").arg(QString::fromStdString(part.part),
+                                                    sensitivityText(part.value));
+        parts_[row] = names;
+        auto* item = cell(shown.isEmpty() ? tr("—") : shown.join(QStringLiteral(", ")));
+        item->setData(PartsRole, names);
+        item->setToolTip(all.isEmpty() ? tr("No part moves this corner.")
+                                       : tr("d ln f / d ln x for every part that moves it:\n")
+                                             + all.join(QLatin1Char('\n')));
+        setItem(row, PartsColumn, item);
+    }
+    if (selectedCorner() >= 0)
+        emitSelection();
+}
+
+void CornerTable::clearCorners()
+{
+    const bool hadSelection = selectedCorner() >= 0;
+    {
+        const QSignalBlocker block(this);
+        clearContents();
+        setRowCount(0);
+        parts_.clear();
+    }
+    if (hadSelection)
+        emit cornerSelected(-1, {});
+}
+
+int CornerTable::selectedCorner() const
+{
+    const auto rows = selectionModel() ? selectionModel()->selectedRows() : QModelIndexList{};
+    return rows.isEmpty() ? -1 : rows.front().row();
+}
+
+void CornerTable::selectCorner(int index)
+{
+    if (index < 0 || index >= rowCount())
+        clearSelection();
+    else
+        selectRow(index);
+}
+
+QStringList CornerTable::partsForCorner(int index) const
+{
+    if (index < 0 || index >= static_cast<int>(parts_.size()))
+        return {};
+    return parts_[index];
+}
+
+void CornerTable::emitSelection()
+{
+    const int index = selectedCorner();
+    emit cornerSelected(index, partsForCorner(index));
+}
+
+}  // namespace tauline::ui
