@@ -2,6 +2,7 @@
 
 #include "EquilibratedLu.h"
 #include "Errors.h"
+#include "OriginMultiplicity.h"
 #include "PencilRoots.h"
 #include "RootPolynomial.h"
 
@@ -160,12 +161,14 @@ ExactResponse solveExact(const NodalModel& model)
     zeros.lowRate = low;
     zeros.highRate = high;
     // At the origin: an impedance's zeros are the port-shorted network's
-    // floating pieces; a transfer's are the cluster there.
-    const int zeroOrigin =
-        model.kind == ResponseKind::Impedance
-            ? floatingComponents(dcComponents(model, {{model.inputNodes[0], model.inputNodes[1]}}))
-            : -1;
-    out.rawZeros = finitePencilRoots(zeros, zeroOrigin).roots;
+    // floating pieces; a transfer's are bounded by rank tests on the
+    // bordered pencil there, and only inside those bounds by root sizes.
+    if (model.kind == ResponseKind::Impedance) {
+        const int count = floatingComponents(dcComponents(model, {{model.inputNodes[0], model.inputNodes[1]}}));
+        out.rawZeros = finitePencilRoots(zeros, count).roots;
+    } else {
+        out.rawZeros = finitePencilRoots(zeros, originMultiplicity(zeros)).roots;
+    }
 
     const double s1 = geometricMeanMagnitude(out.rawPoles, out.rawZeros, std::sqrt(low * high));
     const double rawGain = gainFromEvaluation(model, out.rawPoles, out.rawZeros, s1);

@@ -5,6 +5,7 @@
 #include <Eigen/Eigenvalues>
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <stdexcept>
 
 namespace tauline {
@@ -65,6 +66,12 @@ bool rootsAtShift(const PencilRootProblem& p, double sigma, std::vector<std::com
 }  // namespace
 
 PencilRoots finitePencilRoots(const PencilRootProblem& problem, int originRoots)
+{
+    return originRoots < 0 ? finitePencilRoots(problem, OriginRootBounds{0, std::numeric_limits<int>::max()})
+                           : finitePencilRoots(problem, OriginRootBounds{originRoots, originRoots});
+}
+
+PencilRoots finitePencilRoots(const PencilRootProblem& problem, OriginRootBounds origin)
 {
     PencilRoots out;
     if (problem.capacitance.size() == 0)
@@ -129,9 +136,10 @@ PencilRoots finitePencilRoots(const PencilRootProblem& problem, int originRoots)
                     roots.end());
 
     std::sort(roots.begin(), roots.end(), [](auto x, auto y) { return std::abs(x) < std::abs(y); });
-    if (originRoots < 0) {
-        originRoots = 0;
-        while (originRoots < static_cast<int>(roots.size()) && std::abs(roots[originRoots]) < kOriginCluster * low)
+    int originRoots = origin.atLeast;
+    if (origin.atMost > origin.atLeast) {
+        while (originRoots < origin.atMost && originRoots < static_cast<int>(roots.size()) &&
+               std::abs(roots[originRoots]) < kOriginCluster * low)
             ++originRoots;
     }
     for (int i = 0; i < originRoots && i < static_cast<int>(roots.size()); ++i)

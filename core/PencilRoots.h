@@ -34,4 +34,13 @@ struct PencilRoots {
 // below lowRate is taken as the origin's.
 PencilRoots finitePencilRoots(const PencilRootProblem& problem, int originRoots);
 
+// Bounds on the multiplicity at the origin where only those are certain:
+// the cluster of roots far below lowRate is counted, then brought within
+// [atLeast, atMost].
+struct OriginRootBounds {
+    int atLeast = 0;
+    int atMost = 0;
+};
+PencilRoots finitePencilRoots(const PencilRootProblem& problem, OriginRootBounds origin);
+
 }  // namespace tauline
