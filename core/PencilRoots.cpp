@@ -5,7 +5,6 @@
 #include <Eigen/Eigenvalues>
 #include <algorithm>
 #include <cmath>
-#include <limits>
 #include <stdexcept>
 
 namespace tauline {
@@ -67,8 +66,7 @@ bool rootsAtShift(const PencilRootProblem& p, double sigma, std::vector<std::com
 
 PencilRoots finitePencilRoots(const PencilRootProblem& problem, int originRoots)
 {
-    return originRoots < 0 ? finitePencilRoots(problem, OriginRootBounds{0, std::numeric_limits<int>::max()})
-                           : finitePencilRoots(problem, OriginRootBounds{originRoots, originRoots});
+    return finitePencilRoots(problem, OriginRootBounds{originRoots, originRoots});
 }
 
 PencilRoots finitePencilRoots(const PencilRootProblem& problem, OriginRootBounds origin)

@@ -30,8 +30,7 @@ struct PencilRoots {
 
 // Exactly `originRoots` roots, those nearest the origin, are set to 0: the
 // caller knows the multiplicity there better than rounding does (a double
-// root at 0 splits by √ε). With originRoots < 0, the cluster of roots far
-// below lowRate is taken as the origin's.
+// root at 0 splits by √ε).
 PencilRoots finitePencilRoots(const PencilRootProblem& problem, int originRoots);
 
 // Bounds on the multiplicity at the origin where only those are certain:
