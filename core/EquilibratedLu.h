@@ -28,16 +28,21 @@ public:
 
     bool regular() const { return finiteScales_ && lu_.rcond() > 1e-13; }
 
-    Matrix solve(const Matrix& rhs) const
+    // `refinements` extended-precision correction steps: two for a response
+    // value that must hold to rounding; fewer where many right-hand sides
+    // feed an eigenproblem (each step costs a long-double product).
+    Matrix solve(const Matrix& rhs, int refinements = 2) const
     {
         using Extended = std::conditional_t<Eigen::NumTraits<Scalar>::IsComplex, std::complex<long double>, long double>;
         using ExtendedMatrix = Eigen::Matrix<Extended, Eigen::Dynamic, Eigen::Dynamic>;
         auto once = [&](const Matrix& b) -> Matrix {
             return colScale_.asDiagonal() * lu_.solve(rowScale_.asDiagonal() * b);
         };
-        const ExtendedMatrix aExt = a_.template cast<Extended>();
         Matrix x = once(rhs);
-        for (int step = 0; step < 2; ++step) {
+        if (refinements == 0)
+            return x;
+        const ExtendedMatrix aExt = a_.template cast<Extended>();
+        for (int step = 0; step < refinements; ++step) {
             const ExtendedMatrix residual = rhs.template cast<Extended>() - aExt * x.template cast<Extended>();
             x += once(residual.template cast<Scalar>());
         }

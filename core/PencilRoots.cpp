@@ -22,15 +22,19 @@ constexpr double kOriginCluster = 1e-3;
 constexpr double kDecadesPerShift = 2.0;
 
 // Eigenvalues μ of K for one shift; empty when A(σ) is singular there.
-bool shiftedEigenvalues(const PencilRootProblem& p, double sigma, std::vector<std::complex<double>>& mu)
+// `reactive` is P·diag(cap)·Pᵀ, formed once for all shifts.
+bool shiftedEigenvalues(const PencilRootProblem& p, const Eigen::MatrixXd& reactive, double sigma,
+                        std::vector<std::complex<double>>& mu)
 {
-    const Eigen::MatrixXd a = p.a0 + sigma * p.ports * p.capacitance.asDiagonal() * p.ports.transpose();
+    const Eigen::MatrixXd a = p.a0 + sigma * reactive;
     const EquilibratedLu<double> lu(a);
     if (!lu.regular())
         return false;
     const Eigen::VectorXd root = p.capacitance.cwiseSqrt();
     const Eigen::MatrixXd scaledPorts = p.ports * root.asDiagonal();
-    Eigen::MatrixXd k = scaledPorts.transpose() * lu.solve(scaledPorts);
+    // One refinement step: without it the slowest zeros of some transfers
+    // drift past 1e-9; a second step buys nothing measurable.
+    Eigen::MatrixXd k = scaledPorts.transpose() * lu.solve(scaledPorts, 1);
     mu.clear();
     if (p.symmetric) {
         k = 0.5 * (k + k.transpose());
@@ -47,10 +51,11 @@ bool shiftedEigenvalues(const PencilRootProblem& p, double sigma, std::vector<st
 
 // Finite roots for one shift; false when A(σ) is singular there (a shift on
 // a root, or σ·C swamping a conductive path to the reference).
-bool rootsAtShift(const PencilRootProblem& p, double sigma, std::vector<std::complex<double>>& roots)
+bool rootsAtShift(const PencilRootProblem& p, const Eigen::MatrixXd& reactive, double sigma,
+                  std::vector<std::complex<double>>& roots)
 {
     std::vector<std::complex<double>> mu;
-    if (!shiftedEigenvalues(p, sigma, mu))
+    if (!shiftedEigenvalues(p, reactive, sigma, mu))
         return false;
     roots.clear();
     for (const auto& m : mu) {
@@ -79,6 +84,8 @@ PencilRoots finitePencilRoots(const PencilRootProblem& problem, OriginRootBounds
     const double high = std::max(problem.highRate, low);
     int shifts = 1 + static_cast<int>(std::ceil(std::log10(high / low) / kDecadesPerShift));
 
+    const Eigen::MatrixXd reactive =
+        problem.ports * problem.capacitance.asDiagonal() * problem.ports.transpose();
     std::vector<double> sigma;
     std::vector<std::vector<std::complex<double>>> perShift;
     for (int k = 0; k < shifts; ++k) {
@@ -86,7 +93,7 @@ PencilRoots finitePencilRoots(const PencilRootProblem& problem, OriginRootBounds
         std::vector<std::complex<double>> roots;
         // A shift that lands on a root leaves A(σ) singular: nudge it once.
         for (double s : {candidate, candidate * 1.618})
-            if (rootsAtShift(problem, s, roots)) {
+            if (rootsAtShift(problem, reactive, s, roots)) {
                 sigma.push_back(s);
                 perShift.push_back(roots);
                 break;

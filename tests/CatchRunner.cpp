@@ -8,6 +8,8 @@
 
 #ifdef TAULINE_WITH_UI
 #include <QApplication>
+#include <QSettings>
+#include <QTemporaryDir>
 #endif
 
 int main(int argc, char* argv[])
@@ -16,6 +18,11 @@ int main(int argc, char* argv[])
     if (!std::getenv("QT_QPA_PLATFORM"))
         setenv("QT_QPA_PLATFORM", "offscreen", 1);
     QApplication app(argc, argv);
+    // ctest runs test processes side by side: each gets settings of its own,
+    // so one test's saved window layout never lands in another's.
+    QTemporaryDir settingsDir;
+    QSettings::setPath(QSettings::NativeFormat, QSettings::UserScope, settingsDir.path());
+    QSettings::setPath(QSettings::IniFormat, QSettings::UserScope, settingsDir.path());
 #endif
     return Catch::Session().run(argc, argv);
 }
