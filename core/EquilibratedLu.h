@@ -26,7 +26,15 @@ public:
             lu_.compute(rowScaled * colScale_.asDiagonal());
     }
 
-    bool regular() const { return finiteScales_ && lu_.rcond() > 1e-13; }
+    bool regular() const { return reciprocalCondition() > 1e-13; }
+    // Of the scaled matrix; 0 when a row or column is all zero or a pivot is
+    // exactly zero (Eigen's estimate is meaningless then).
+    double reciprocalCondition() const
+    {
+        if (!finiteScales_ || (lu_.matrixLU().diagonal().array().abs() == 0.0).any())
+            return 0.0;
+        return lu_.rcond();
+    }
 
     // `refinements` extended-precision correction steps: two for a response
     // value that must hold to rounding; fewer where many right-hand sides
