@@ -124,20 +124,30 @@ ExactResponse solveExact(const NodalModel& model)
     const double low = lowestRate(model);
     const double high = highestRate(model);
 
+    // The zeros' pencil: the nodal matrix bordered by input and output.
+    const int n = model.unknowns();
+    PencilRootProblem zeros;
+    zeros.a0 = Eigen::MatrixXd::Zero(n + 1, n + 1);
+    zeros.a0.topLeftCorner(n, n) = model.G;
+    zeros.a0.block(0, n, n, 1) = model.b;
+    zeros.a0.block(n, 0, 1, n) = model.c.transpose();
+    zeros.ports = Eigen::MatrixXd::Zero(n + 1, model.capacitorCount());
+    zeros.ports.topRows(n) = model.ports;
+    zeros.capacitance = model.capacitance;
+    zeros.symmetric = model.kind == ResponseKind::Impedance;
+    zeros.lowRate = low;
+    zeros.highRate = high;
+
     // A response that is zero at every frequency has no numerator at all: the
     // bordered nodal matrix is singular at every s. Tested on the imaginary
     // axis (no digits lost between conductance and susceptance) at two
     // unrelated frequencies, against rounding-level conditioning only, so a
     // network with a tiny but real gain is not mistaken for one with none.
     {
+        const Eigen::MatrixXd reactive = zeros.ports * zeros.capacitance.asDiagonal() * zeros.ports.transpose();
         bool singularEverywhere = true;
         for (double w : {std::sqrt(low * high), 0.37 * std::sqrt(low * high) + 2.9 * low}) {
-            const int n = model.unknowns();
-            Eigen::MatrixXcd bordered = Eigen::MatrixXcd::Zero(n + 1, n + 1);
-            bordered.topLeftCorner(n, n) = model.G.cast<cd>() + cd(0.0, w) * model.C.cast<cd>();
-            bordered.block(0, n, n, 1) = model.b.cast<cd>();
-            bordered.block(n, 0, 1, n) = model.c.transpose().cast<cd>();
-            // An exact zero pivot leaves the estimate NaN: singular too.
+            const Eigen::MatrixXcd bordered = zeros.a0.cast<cd>() + cd(0.0, w) * reactive.cast<cd>();
             singularEverywhere = singularEverywhere && !(EquilibratedLu<cd>(bordered).reciprocalCondition() >= 1e-15);
         }
         if (singularEverywhere)
@@ -152,19 +162,6 @@ ExactResponse solveExact(const NodalModel& model)
     PencilRootProblem poles{model.G, model.ports, model.capacitance, true, low, high};
     out.rawPoles = finitePencilRoots(poles, floatingComponents(dcComponents(model, sourceEdge))).roots;
 
-    const int n = model.unknowns();
-    PencilRootProblem zeros;
-    zeros.a0 = Eigen::MatrixXd::Zero(n + 1, n + 1);
-    zeros.a0.topLeftCorner(n, n) = model.G;
-    zeros.a0.block(0, n, n, 1) = model.b;
-    zeros.a0.block(n, 0, 1, n) = model.c.transpose();
-    zeros.ports = Eigen::MatrixXd::Zero(n + 1, model.capacitorCount());
-    zeros.ports.topRows(n) = model.ports;
-    zeros.capacitance = model.capacitance;
-    zeros.symmetric = model.kind == ResponseKind::Impedance;
-    // A transfer's zeros, unlike its poles, may lie far below 1/(ΣR·ΣC).
-    zeros.lowRate = low;
-    zeros.highRate = high;
     // At the origin: an impedance's zeros are the port-shorted network's
     // floating pieces; a transfer's are bounded by rank tests on the
     // bordered pencil there, and only inside those bounds by root sizes.

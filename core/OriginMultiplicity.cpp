@@ -1,6 +1,7 @@
 #include "OriginMultiplicity.h"
 
-#include <Eigen/LU>
+#include "EquilibratedLu.h"
+
 #include <Eigen/SVD>
 #include <algorithm>
 #include <cmath>
@@ -82,13 +83,9 @@ OriginRootBounds originMultiplicity(const PencilRootProblem& p)
     // settles that with one LU. The condition estimate is within a factor of
     // ~10·n of σ_min/σ_max: above 1e-5, det A0 is far from rounding level
     // for n ≲ 100, and s = 0 is no root at all.
+    if (EquilibratedLu<double>(a).reciprocalCondition() > 1e-5)
+        return {0, 0};
     equilibrate(a, b);
-    {
-        const Eigen::PartialPivLU<Eigen::MatrixXd> lu(a);
-        const double rcond = lu.rcond();  // not to be trusted with a zero pivot
-        if ((lu.matrixLU().diagonal().array().abs() > 0.0).all() && std::isfinite(rcond) && rcond > 1e-5)
-            return {0, 0};
-    }
     // Only the certain count is used as a bound. A count with the looser
     // tolerance as its upper bound fell short on random networks (a later
     // pass's rounding above kCertainZero hid a second root at 0), so above
