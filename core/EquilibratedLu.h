@@ -2,6 +2,9 @@
 
 #include <Eigen/Dense>
 #include <complex>
+#include <type_traits>
+#include <utility>
+#include <vector>
 
 namespace tauline {
 
@@ -14,8 +17,17 @@ template <typename Scalar>
 class EquilibratedLu {
 public:
     using Matrix = Eigen::Matrix<Scalar, Eigen::Dynamic, Eigen::Dynamic>;
+    using Extended = std::conditional_t<Eigen::NumTraits<Scalar>::IsComplex, std::complex<long double>, long double>;
+    using ExtendedMatrix = Eigen::Matrix<Extended, Eigen::Dynamic, Eigen::Dynamic>;
 
-    explicit EquilibratedLu(const Matrix& a) : a_(a)
+    explicit EquilibratedLu(const Matrix& a) : EquilibratedLu(a, a.template cast<Extended>()) {}
+
+    // `exact` is the same matrix formed in extended precision (its entries
+    // summed there from the part values): the refinement then converges to
+    // its solution, not to that of `a`, whose rounded sums break the
+    // relations (a dead-end branch carrying no current, a floating piece)
+    // that near-cancelling responses rest on.
+    EquilibratedLu(const Matrix& a, ExtendedMatrix exact) : aExt_(std::move(exact))
     {
         rowScale_ = a.cwiseAbs().rowwise().maxCoeff().cwiseInverse();
         const Matrix rowScaled = rowScale_.asDiagonal() * a;
@@ -41,24 +53,42 @@ public:
     // feed an eigenproblem (each step costs a long-double product).
     Matrix solve(const Matrix& rhs, int refinements = 2) const
     {
-        using Extended = std::conditional_t<Eigen::NumTraits<Scalar>::IsComplex, std::complex<long double>, long double>;
-        using ExtendedMatrix = Eigen::Matrix<Extended, Eigen::Dynamic, Eigen::Dynamic>;
         auto once = [&](const Matrix& b) -> Matrix {
             return colScale_.asDiagonal() * lu_.solve(rowScale_.asDiagonal() * b);
         };
         Matrix x = once(rhs);
         if (refinements == 0)
             return x;
-        const ExtendedMatrix aExt = a_.template cast<Extended>();
+        // A column's corrections must shrink, or they stop: where the
+        // matrix is too ill-conditioned for the double factors to reach the
+        // extended matrix's solution, x stays the double one.
+        Eigen::VectorXd previous = x.colwise().norm().transpose();
+        std::vector<bool> converging(x.cols(), true);
         for (int step = 0; step < refinements; ++step) {
-            const ExtendedMatrix residual = rhs.template cast<Extended>() - aExt * x.template cast<Extended>();
-            x += once(residual.template cast<Scalar>());
+            const ExtendedMatrix residual = rhs.template cast<Extended>() - aExt_ * x.template cast<Extended>();
+            const Matrix correction = once(residual.template cast<Scalar>());
+            for (int j = 0; j < x.cols(); ++j) {
+                const double size = correction.col(j).norm();
+                if (!converging[j] || !(size <= 0.5 * previous(j))) {
+                    converging[j] = false;
+                    continue;
+                }
+                x.col(j) += correction.col(j);
+                previous(j) = size;
+            }
         }
         return x;
     }
 
+    // The residual rhs − A·x in extended precision, for callers that keep
+    // the last correction apart from x.
+    ExtendedMatrix residual(const Matrix& rhs, const Matrix& x) const
+    {
+        return rhs.template cast<Extended>() - aExt_ * x.template cast<Extended>();
+    }
+
 private:
-    Matrix a_;
+    ExtendedMatrix aExt_;
     Eigen::VectorXd rowScale_;
     Eigen::VectorXd colScale_;
     Eigen::PartialPivLU<Matrix> lu_;

@@ -8,6 +8,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <set>
 
 namespace tauline {
@@ -25,33 +26,91 @@ int floatingComponents(const std::vector<int>& labels)
     return static_cast<int>(floating.size());
 }
 
-// The lowest non-zero numerator coefficient K' from exact evaluations:
-// H(s) = K'·s^(mz−mp)·Π(1 − s/z)/Π(1 − s/p). Three points a decade and a
-// half apart around s1, each clear of the roots; the median guards against
-// one that lands where the nodal matrix is badly conditioned. The points are
-// on the imaginary axis: there a node's small conductance and large
-// susceptance sit in separate parts of one entry, and no digits are lost
-// adding them.
-double gainFromEvaluation(const NodalModel& model, const std::vector<cd>& poles, const std::vector<cd>& zeros,
-                          double s1)
+// H at one point on the imaginary axis (there a node's small conductance
+// and large susceptance sit in separate parts of one entry, and no digits are
+// lost adding them), with how much the output's sum cancels: Σ|c_i·x_i|/|H|.
+// The sum is taken in extended precision over x and its last correction
+// kept apart, which recovers most of what the cancellation would lose.
+struct Evaluation {
+    cd s;
+    cd h;
+    double cancellation = 1.0;
+};
+
+Eigen::Matrix<std::complex<long double>, Eigen::Dynamic, Eigen::Dynamic> extendedMatrix(const NodalModel& model, cd s)
 {
-    std::vector<double> estimates;
+    using Extended = std::complex<long double>;
+    return model.extendedG.cast<Extended>() + Extended(s.real(), s.imag()) * model.extendedC.cast<Extended>();
+}
+
+Evaluation evaluateWithCancellation(const NodalModel& model, double omega)
+{
+    using Extended = std::complex<long double>;
+    const cd s(0.0, omega);
+    const Eigen::MatrixXcd a = model.G.cast<cd>() + s * model.C.cast<cd>();
+    const EquilibratedLu<cd> lu(a, extendedMatrix(model, s));
+    const Eigen::MatrixXcd x = lu.solve(model.b.cast<cd>(), 2);
+    const Eigen::MatrixXcd correction = lu.solve(lu.residual(model.b.cast<cd>(), x).cast<cd>(), 0);
+    Extended sum = 0.0L;
+    long double magnitude = 0.0L;
+    for (int i = 0; i < model.unknowns(); ++i) {
+        if (model.c(i) == 0.0)
+            continue;
+        const Extended term = static_cast<long double>(model.c(i)) *
+                              (Extended(x(i, 0)) + Extended(correction(i, 0)));
+        sum += term;
+        magnitude += std::abs(term);
+    }
+    Evaluation out;
+    out.s = s;
+    out.h = cd(static_cast<double>(sum.real()), static_cast<double>(sum.imag()));
+    out.cancellation = std::abs(sum) > 0.0L ? static_cast<double>(magnitude / std::abs(sum)) : 1e300;
+    return out;
+}
+
+// Points to evaluate H at for the gain: decades around s1, where the
+// output's cancellation differs (it grows with frequency on some networks,
+// falls on others).
+std::vector<Evaluation> gainEvaluations(const NodalModel& model, double s1)
+{
+    std::vector<Evaluation> out;
+    for (double factor : {1.0, 1.0 / 30.0, 30.0, 1e-3, 1e3})
+        out.push_back(evaluateWithCancellation(model, s1 * factor * 1.0137));
+    return out;
+}
+
+// The lowest non-zero numerator coefficient K' from exact evaluations:
+// H(s) = K'·s^(mz−mp)·Π(1 − s/z)/Π(1 − s/p), taken at the point where the
+// error is smallest: the evaluation's cancellation, the roots' rounding as
+// the factors amplify it near a root, and the imaginary part K' must not
+// have (each an estimate of relative error).
+double gainFromEvaluation(const std::vector<Evaluation>& points, const std::vector<cd>& poles,
+                          const std::vector<cd>& zeros)
+{
     const int power = originCount(zeros) - originCount(poles);
-    for (double at : {s1, s1 / 30.0, s1 * 30.0}) {
-        for (int attempt = 0; attempt < 6; ++attempt, at *= 1.37) {
-            const cd s(0.0, at);
-            const cd zf = productOfFactors(zeros, s);
-            const cd pf = productOfFactors(poles, s);
-            if (std::abs(zf) < 1e-6 || std::abs(pf) < 1e-6)
-                continue;  // too near a root for a clean quotient
-            estimates.push_back((directResponse(model, s) * pf / (zf * std::pow(s, power))).real());
-            break;
+    double best = 0.0;
+    double bestError = std::numeric_limits<double>::infinity();
+    for (const Evaluation& e : points) {
+        const cd zf = productOfFactors(zeros, e.s);
+        const cd pf = productOfFactors(poles, e.s);
+        if (std::abs(zf) < 1e-6 || std::abs(pf) < 1e-6 || e.h == cd(0.0, 0.0))
+            continue;  // too near a root for a clean quotient
+        const cd estimate = e.h * pf / (zf * std::pow(e.s, power));
+        double amplified = 0.0;
+        for (const auto* list : {&zeros, &poles})
+            for (const cd& r : *list)
+                if (r != cd(0.0, 0.0))
+                    amplified += std::abs(e.s / r) / std::abs(1.0 - e.s / r);
+        const double error = std::max({1e-16 * e.cancellation, 1e-13 * amplified,
+                                       std::abs(estimate.imag()) / std::abs(estimate)});
+        if (error < bestError) {
+            bestError = error;
+            best = estimate.real();
         }
     }
-    if (estimates.empty())
+    if (!std::isfinite(bestError))
         throw InputError("response: cannot evaluate the network away from its poles and zeros");
-    std::sort(estimates.begin(), estimates.end());
-    return estimates[estimates.size() / 2];
+    return best;
 }
 
 double geometricMeanMagnitude(const std::vector<cd>& a, const std::vector<cd>& b, double fallback)
@@ -109,7 +168,7 @@ double highestRate(const NodalModel& model)
 cd directResponse(const NodalModel& model, cd s)
 {
     const Eigen::MatrixXcd a = model.G.cast<cd>() + s * model.C.cast<cd>();
-    const Eigen::MatrixXcd x = EquilibratedLu<cd>(a).solve(model.b.cast<cd>());
+    const Eigen::MatrixXcd x = EquilibratedLu<cd>(a, extendedMatrix(model, s)).solve(model.b.cast<cd>());
     return model.c.cast<cd>().dot(x.col(0));  // dot conjugates its first argument: c is real
 }
 
@@ -124,15 +183,21 @@ ExactResponse solveExact(const NodalModel& model)
     const double low = lowestRate(model);
     const double high = highestRate(model);
 
+    // The pencils in coordinates where a floating piece's singularity at
+    // DC is exact (see anchorFloatingPieces); evaluations keep the model.
+    const NodalModel anchored = anchorFloatingPieces(model);
+
     // The zeros' pencil: the nodal matrix bordered by input and output.
     const int n = model.unknowns();
     PencilRootProblem zeros;
     zeros.a0 = Eigen::MatrixXd::Zero(n + 1, n + 1);
-    zeros.a0.topLeftCorner(n, n) = model.G;
-    zeros.a0.block(0, n, n, 1) = model.b;
-    zeros.a0.block(n, 0, 1, n) = model.c.transpose();
+    zeros.a0.topLeftCorner(n, n) = anchored.G;
+    zeros.a0.block(0, n, n, 1) = anchored.b;
+    zeros.a0.block(n, 0, 1, n) = anchored.c.transpose();
+    zeros.a0Extended = zeros.a0.cast<long double>();
+    zeros.a0Extended.topLeftCorner(n, n) = anchored.extendedG;
     zeros.ports = Eigen::MatrixXd::Zero(n + 1, model.capacitorCount());
-    zeros.ports.topRows(n) = model.ports;
+    zeros.ports.topRows(n) = anchored.ports;
     zeros.capacitance = model.capacitance;
     zeros.symmetric = model.kind == ResponseKind::Impedance;
     zeros.lowRate = low;
@@ -148,7 +213,18 @@ ExactResponse solveExact(const NodalModel& model)
         bool singularEverywhere = true;
         for (double w : {std::sqrt(low * high), 0.37 * std::sqrt(low * high) + 2.9 * low}) {
             const Eigen::MatrixXcd bordered = zeros.a0.cast<cd>() + cd(0.0, w) * reactive.cast<cd>();
-            singularEverywhere = singularEverywhere && !(EquilibratedLu<cd>(bordered).reciprocalCondition() >= 1e-15);
+            if (EquilibratedLu<cd>(bordered).reciprocalCondition() >= 1e-15) {
+                singularEverywhere = false;
+                break;
+            }
+            // With part values over many decades a real response can leave
+            // the bordered matrix that badly conditioned too: the output's
+            // own sum then says whether H is more than rounding.
+            const Evaluation e = evaluateWithCancellation(model, w);
+            if (e.h != cd(0.0, 0.0) && e.cancellation < 1e12) {
+                singularEverywhere = false;
+                break;
+            }
         }
         if (singularEverywhere)
             throw InputError("response: the output does not depend on the input (the response is zero at every frequency)");
@@ -159,7 +235,7 @@ ExactResponse solveExact(const NodalModel& model)
         sourceEdge.push_back({model.inputNodes[0], model.inputNodes[1]});
 
     // At the origin: one pole per piece with no DC path to the reference.
-    PencilRootProblem poles{model.G, model.ports, model.capacitance, true, low, high};
+    PencilRootProblem poles{anchored.G, anchored.extendedG, anchored.ports, model.capacitance, true, low, high};
     out.rawPoles = finitePencilRoots(poles, floatingComponents(dcComponents(model, sourceEdge))).roots;
 
     // At the origin: an impedance's zeros are the port-shorted network's
@@ -173,7 +249,8 @@ ExactResponse solveExact(const NodalModel& model)
     }
 
     const double s1 = geometricMeanMagnitude(out.rawPoles, out.rawZeros, std::sqrt(low * high));
-    const double rawGain = gainFromEvaluation(model, out.rawPoles, out.rawZeros, s1);
+    const std::vector<Evaluation> points = gainEvaluations(model, s1);
+    const double rawGain = gainFromEvaluation(points, out.rawPoles, out.rawZeros);
     out.rawDenominator = polynomialFromRoots(out.rawPoles);
     out.rawNumerator = polynomialFromRoots(out.rawZeros);
     for (auto& a : out.rawNumerator)
@@ -182,10 +259,9 @@ ExactResponse solveExact(const NodalModel& model)
     out.poles = out.rawPoles;
     out.zeros = out.rawZeros;
     cancelCommonRoots(out.poles, out.zeros);
-    // K' is the same in theory; evaluated again from the reduced roots it
-    // does not carry the rounding of the pairs that cancelled.
-    out.gainConstant =
-        gainFromEvaluation(model, out.poles, out.zeros, geometricMeanMagnitude(out.poles, out.zeros, s1));
+    // K' is the same in theory; taken again from the reduced roots it does
+    // not carry the rounding of the pairs that cancelled.
+    out.gainConstant = gainFromEvaluation(points, out.poles, out.zeros);
     out.originPower = originCount(out.zeros) - originCount(out.poles);
     out.denominator = polynomialFromRoots(out.poles);
     out.numerator = polynomialFromRoots(out.zeros);

@@ -137,7 +137,9 @@ NodalModel buildNodalModel(const Network& network)
     model.b = Eigen::VectorXd::Zero(n);
     model.c = Eigen::VectorXd::Zero(n);
 
-    auto stamp = [](Eigen::MatrixXd& m, int a, int b, double y) {
+    model.extendedG = NodalModel::ExtendedMatrix::Zero(n, n);
+    model.extendedC = NodalModel::ExtendedMatrix::Zero(n, n);
+    auto stamp = [](auto& m, int a, int b, auto y) {
         if (a >= 0) m(a, a) += y;
         if (b >= 0) m(b, b) += y;
         if (a >= 0 && b >= 0) {
@@ -159,13 +161,15 @@ NodalModel buildNodalModel(const Network& network)
         const int b = indexOf(part->nodes[1]);
         if (part->kind == PartKind::Resistor) {
             stamp(model.G, a, b, 1.0 / part->value);
-            model.resistorEdges.push_back({a, b});
+            stamp(model.extendedG, a, b, 1.0L / part->value);
+            model.resistorEdges.push_back({a, b, part->value});
             model.sumResistance += part->value;
             minR = std::min(minR, part->value);
             ++model.resistorCount;
         } else {
             const int k = static_cast<int>(model.capacitorNames.size());
             stamp(model.C, a, b, part->value);
+            stamp(model.extendedC, a, b, static_cast<long double>(part->value));
             if (a >= 0) model.ports(a, k) = 1.0;
             if (b >= 0) model.ports(b, k) = -1.0;
             model.capacitance(k) = part->value;
@@ -200,6 +204,8 @@ NodalModel buildNodalModel(const Network& network)
             const double sign = side == 0 ? 1.0 : -1.0;
             model.G(node, nodes) += sign;
             model.G(nodes, node) += sign;
+            model.extendedG(node, nodes) += sign;
+            model.extendedG(nodes, node) += sign;
         }
         model.b(nodes) = 1.0;
     } else {
@@ -236,6 +242,70 @@ std::vector<int> dcComponents(const NodalModel& model, const std::vector<NodalMo
         const int root = find(k + 1);
         auto [it, inserted] = label.emplace(root, static_cast<int>(label.size()));
         out[k] = it->second;
+    }
+    return out;
+}
+
+NodalModel anchorFloatingPieces(const NodalModel& model)
+{
+    std::vector<NodalModel::Edge> sourceEdge;
+    if (model.kind == ResponseKind::VoltageGain)
+        sourceEdge.push_back({model.inputNodes[0], model.inputNodes[1]});
+    const std::vector<int> piece = dcComponents(model, sourceEdge);
+    std::map<int, int> anchorOf;  // piece label -> anchor node
+    for (int k = 0; k < model.nodeCount(); ++k)
+        if (piece[k] != 0)
+            anchorOf.emplace(piece[k], k);
+    if (anchorOf.empty())
+        return model;
+
+    // v = T·y: a floating node's voltage is its anchor's plus its own
+    // coordinate. Everything stamped through the incidence of a node pair
+    // goes through Tᵀ, which on integer vectors is exact.
+    const int n = model.unknowns();
+    auto anchor = [&](int node) { return node >= 0 && piece[node] != 0 ? anchorOf.at(piece[node]) : -1; };
+    auto liftRows = [&](Eigen::MatrixXd m) {  // Tᵀ·m
+        for (int k = 0; k < model.nodeCount(); ++k) {
+            const int a = anchor(k);
+            if (a >= 0 && a != k)
+                m.row(a) += m.row(k);
+        }
+        return m;
+    };
+    NodalModel out = model;
+    out.b = liftRows(model.b);
+    out.c = liftRows(model.c);
+    out.ports = liftRows(model.ports);
+    out.C = out.ports * model.capacitance.asDiagonal() * out.ports.transpose();
+    out.extendedC = out.ports.cast<long double>() * model.capacitance.cast<long double>().asDiagonal() *
+                    out.ports.cast<long double>().transpose();
+
+    // Resistors: stamped on differences of the new coordinates, where an
+    // anchor's own coordinate cancels inside its piece.
+    out.G = Eigen::MatrixXd::Zero(n, n);
+    out.extendedG = NodalModel::ExtendedMatrix::Zero(n, n);
+    auto coordinate = [&](int node) { return node >= 0 && anchor(node) == node ? -1 : node; };
+    auto stamp = [](auto& m, int a, int b, auto y) {
+        if (a >= 0) m(a, a) += y;
+        if (b >= 0) m(b, b) += y;
+        if (a >= 0 && b >= 0) {
+            m(a, b) -= y;
+            m(b, a) -= y;
+        }
+    };
+    for (const auto& e : model.resistorEdges) {
+        stamp(out.G, coordinate(e.a), coordinate(e.b), 1.0 / e.resistance);
+        stamp(out.extendedG, coordinate(e.a), coordinate(e.b), 1.0L / e.resistance);
+    }
+    if (model.sourceRow >= 0) {
+        // The source's stamps are ±1: Tᵀ·G·T on them is exact.
+        Eigen::MatrixXd source = Eigen::MatrixXd::Zero(n, n);
+        source.row(model.sourceRow) = model.G.row(model.sourceRow);
+        source.col(model.sourceRow) = model.G.col(model.sourceRow);
+        source = liftRows(source);
+        source = liftRows(source.transpose()).transpose();
+        out.G += source;
+        out.extendedG += source.cast<long double>();
     }
     return out;
 }

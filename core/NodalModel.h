@@ -21,6 +21,13 @@ struct NodalModel {
 
     Eigen::MatrixXd G;
     Eigen::MatrixXd C;
+    // G and C with their entries summed in extended precision: the exact
+    // relations between entries (rows of a piece summing to zero, a
+    // dead-end branch carrying no current) hold there to 1e-19, and
+    // near-cancelling responses rest on them (see EquilibratedLu).
+    using ExtendedMatrix = Eigen::Matrix<long double, Eigen::Dynamic, Eigen::Dynamic>;
+    ExtendedMatrix extendedG;
+    ExtendedMatrix extendedC;
     Eigen::VectorXd b;
     Eigen::VectorXd c;
 
@@ -33,6 +40,7 @@ struct NodalModel {
     struct Edge {
         int a = -1;
         int b = -1;  // node indices, -1 = reference
+        double resistance = 0.0;  // ohms, for a resistor
     };
     std::vector<Edge> resistorEdges;
     std::array<int, 2> inputNodes{-1, -1};
@@ -59,5 +67,16 @@ NodalModel buildNodalModel(const Network& network);
 // extra edges, over the model's nodes. Label per node; the reference's
 // component is labelled 0, so a node labelled 0 has a DC path to it.
 std::vector<int> dcComponents(const NodalModel& model, const std::vector<NodalModel::Edge>& extraEdges);
+
+// The same model in coordinates where each piece with no DC path to the
+// reference (through resistors or the input's voltage source) is described
+// by one node's voltage (its anchor) and the other nodes' voltages relative
+// to it. The change of unknowns has determinant 1, so the pencil's roots
+// are the same; but the resistors are stamped on differences alone, so the
+// anchors' rows and columns of G are exactly zero instead of summing to
+// rounding: a floating piece's root at the origin stays exactly there, and
+// the rounding of those sums no longer moves the other roots (by 1e-8
+// relative on some networks).
+NodalModel anchorFloatingPieces(const NodalModel& model);
 
 }  // namespace tauline

@@ -5,6 +5,7 @@
 #include <Eigen/Eigenvalues>
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <stdexcept>
 
 namespace tauline {
@@ -20,20 +21,73 @@ constexpr double kSameRoot = 1e-6;
 // cluster (a real root there needs a bridge balanced to ~0.1 %).
 constexpr double kOriginCluster = 1e-3;
 constexpr double kDecadesPerShift = 2.0;
+constexpr double kEpsilon = std::numeric_limits<double>::epsilon();
+
+// Parlett–Reinsch balancing: a diagonal similarity by powers of two (exact
+// in floating point) that evens out row and column norms. A transfer's K is
+// far from normal (entries 1e5 times its eigenvalues were met), and an
+// unbalanced eigensolver's error scales with the norm, not the eigenvalues.
+void balance(Eigen::MatrixXd& k)
+{
+    const int n = static_cast<int>(k.rows());
+    for (bool changed = true; changed;) {
+        changed = false;
+        for (int i = 0; i < n; ++i) {
+            double c = 0.0;
+            double r = 0.0;
+            for (int j = 0; j < n; ++j)
+                if (j != i) {
+                    c += std::abs(k(j, i));
+                    r += std::abs(k(i, j));
+                }
+            if (c == 0.0 || r == 0.0)
+                continue;
+            const double before = c + r;
+            double f = 1.0;
+            while (c < r / 2.0) {
+                c *= 2.0;
+                r /= 2.0;
+                f *= 2.0;
+            }
+            while (c >= r * 2.0) {
+                c /= 2.0;
+                r *= 2.0;
+                f /= 2.0;
+            }
+            if (c + r < 0.95 * before) {
+                changed = true;
+                k.row(i) /= f;
+                k.col(i) *= f;
+            }
+        }
+    }
+}
 
 // Eigenvalues μ of K for one shift; empty when A(σ) is singular there.
 // `reactive` is P·diag(cap)·Pᵀ, formed once for all shifts.
-bool shiftedEigenvalues(const PencilRootProblem& p, const Eigen::MatrixXd& reactive, double sigma,
+using ExtendedMatrix = Eigen::Matrix<long double, Eigen::Dynamic, Eigen::Dynamic>;
+
+// The reactive part P·diag(cap)·Pᵀ, in double and in extended precision.
+struct Reactive {
+    Eigen::MatrixXd value;
+    ExtendedMatrix extended;
+    ExtendedMatrix a0;
+};
+
+bool shiftedEigenvalues(const PencilRootProblem& p, const Reactive& reactive, double sigma,
                         std::vector<std::complex<double>>& mu)
 {
-    const Eigen::MatrixXd a = p.a0 + sigma * reactive;
-    const EquilibratedLu<double> lu(a);
+    const Eigen::MatrixXd a = p.a0 + sigma * reactive.value;
+    const EquilibratedLu<double> lu(a, reactive.a0 + static_cast<long double>(sigma) * reactive.extended);
     if (!lu.regular())
         return false;
     const Eigen::VectorXd root = p.capacitance.cwiseSqrt();
     const Eigen::MatrixXd scaledPorts = p.ports * root.asDiagonal();
-    // One refinement step: without it the slowest zeros of some transfers
-    // drift past 1e-9; a second step buys nothing measurable.
+    // One step refined against A(σ) formed in extended precision: without
+    // it the slowest zeros of some transfers drift past 1e-9, and near-
+    // cancelling ones by 1e-8 (the rounded sums in A break the relations
+    // they rest on). A second step made some badly conditioned shifts
+    // worse: the double factors no longer contract the difference there.
     Eigen::MatrixXd k = scaledPorts.transpose() * lu.solve(scaledPorts, 1);
     mu.clear();
     if (p.symmetric) {
@@ -42,6 +96,7 @@ bool shiftedEigenvalues(const PencilRootProblem& p, const Eigen::MatrixXd& react
         for (int i = 0; i < eig.eigenvalues().size(); ++i)
             mu.emplace_back(eig.eigenvalues()(i), 0.0);
     } else {
+        balance(k);
         Eigen::EigenSolver<Eigen::MatrixXd> eig(k, false);
         for (int i = 0; i < eig.eigenvalues().size(); ++i)
             mu.push_back(eig.eigenvalues()(i));
@@ -51,7 +106,7 @@ bool shiftedEigenvalues(const PencilRootProblem& p, const Eigen::MatrixXd& react
 
 // Finite roots for one shift; false when A(σ) is singular there (a shift on
 // a root, or σ·C swamping a conductive path to the reference).
-bool rootsAtShift(const PencilRootProblem& p, const Eigen::MatrixXd& reactive, double sigma,
+bool rootsAtShift(const PencilRootProblem& p, const Reactive& reactive, double sigma,
                   std::vector<std::complex<double>>& roots)
 {
     std::vector<std::complex<double>> mu;
@@ -65,6 +120,114 @@ bool rootsAtShift(const PencilRootProblem& p, const Eigen::MatrixXd& reactive, d
         roots.push_back(r);
     }
     return true;
+}
+
+// One root as seen by successive shifts, from the top one down; a shift that
+// saw it as infinite leaves a gap.
+struct RootTrack {
+    std::vector<std::complex<double>> value;  // per shift
+    std::vector<bool> seen;
+};
+
+double relativeDistance(std::complex<double> a, std::complex<double> b)
+{
+    const double scale = std::max(std::abs(a), std::abs(b));
+    return scale == 0.0 ? 1.0 : std::abs(a - b) / scale;  // two exact zeros say nothing
+}
+
+// Tracks started at the top shift; each lower shift's roots are paired with
+// the tracks' latest values, nearest pairs first. A root no track takes
+// starts a track of its own.
+std::vector<RootTrack> followRoots(const std::vector<std::vector<std::complex<double>>>& perShift)
+{
+    const int shifts = static_cast<int>(perShift.size());
+    std::vector<RootTrack> tracks;
+    std::vector<std::complex<double>> latest;
+    auto start = [&](int k, std::complex<double> r) {
+        RootTrack t;
+        t.value.assign(shifts, 0.0);
+        t.seen.assign(shifts, false);
+        t.value[k] = r;
+        t.seen[k] = true;
+        tracks.push_back(t);
+        latest.push_back(r);
+    };
+    for (const auto& r : perShift.back())
+        start(shifts - 1, r);
+    for (int k = shifts - 2; k >= 0; --k) {
+        const auto& list = perShift[k];
+        struct Pair {
+            double distance;
+            int track;
+            int root;
+        };
+        std::vector<Pair> pairs;
+        for (int t = 0; t < static_cast<int>(tracks.size()); ++t)
+            for (int i = 0; i < static_cast<int>(list.size()); ++i)
+                pairs.push_back({std::abs(latest[t] - list[i]), t, i});
+        std::sort(pairs.begin(), pairs.end(), [](const Pair& a, const Pair& b) { return a.distance < b.distance; });
+        std::vector<bool> trackTaken(tracks.size(), false);
+        std::vector<bool> rootTaken(list.size(), false);
+        for (const Pair& p : pairs) {
+            if (trackTaken[p.track] || rootTaken[p.root])
+                continue;
+            trackTaken[p.track] = rootTaken[p.root] = true;
+            tracks[p.track].value[k] = list[p.root];
+            tracks[p.track].seen[k] = true;
+            latest[p.track] = list[p.root];
+        }
+        for (int i = 0; i < static_cast<int>(list.size()); ++i)
+            if (!rootTaken[i])
+                start(k, list[i]);
+    }
+    return tracks;
+}
+
+struct Settled {
+    std::complex<double> value;
+    bool confirmed = false;
+};
+
+// The value where two neighbouring shifts agree best, from the one of the
+// pair nearer the root (on a log scale); confirmed when they agree to
+// kSameRoot. Unconfirmed: the value from the highest shift at or below the
+// root (ε·|r|/σ error), or the nearest shift above it.
+Settled settle(const RootTrack& track, const std::vector<double>& sigma)
+{
+    const int shifts = static_cast<int>(sigma.size());
+    int bestPair = -1;
+    double bestDistance = 0.0;
+    for (int k = 0; k + 1 < shifts; ++k) {
+        if (!track.seen[k] || !track.seen[k + 1])
+            continue;
+        // Far below σ, σ − 1/μ keeps only ε·σ of absolute accuracy: two high
+        // shifts can agree on a low root to within that grid and still be
+        // far off, so the agreement is charged with it.
+        const double size = std::max(std::abs(track.value[k]), std::abs(track.value[k + 1]));
+        const double grid = size > 0.0 ? 4.0 * kEpsilon * (sigma[k] + sigma[k + 1]) / size : 0.0;
+        const double d = relativeDistance(track.value[k], track.value[k + 1]) + grid;
+        if (bestPair < 0 || d < bestDistance) {
+            bestPair = k;
+            bestDistance = d;
+        }
+    }
+    auto logGap = [&](int k, std::complex<double> r) {
+        return std::abs(std::log(std::max(std::abs(r), 1e-300) / sigma[k]));
+    };
+    Settled out;
+    if (bestPair >= 0 && bestDistance <= kSameRoot) {
+        const auto a = track.value[bestPair];
+        const auto b = track.value[bestPair + 1];
+        out.value = logGap(bestPair, a) <= logGap(bestPair + 1, b) ? a : b;
+        out.confirmed = true;
+        return out;
+    }
+    int chosen = -1;
+    for (int k = 0; k < shifts; ++k)
+        if (track.seen[k] && (chosen < 0 || sigma[k] <= std::abs(track.value[k])))
+            chosen = k;
+    out.value = track.value[chosen];
+    return out;
 }
 
 }  // namespace
@@ -84,8 +247,11 @@ PencilRoots finitePencilRoots(const PencilRootProblem& problem, OriginRootBounds
     const double high = std::max(problem.highRate, low);
     int shifts = 1 + static_cast<int>(std::ceil(std::log10(high / low) / kDecadesPerShift));
 
-    const Eigen::MatrixXd reactive =
-        problem.ports * problem.capacitance.asDiagonal() * problem.ports.transpose();
+    Reactive reactive;
+    reactive.value = problem.ports * problem.capacitance.asDiagonal() * problem.ports.transpose();
+    reactive.extended = problem.ports.cast<long double>() * problem.capacitance.cast<long double>().asDiagonal() *
+                        problem.ports.cast<long double>().transpose();
+    reactive.a0 = problem.a0Extended.size() ? problem.a0Extended : problem.a0.cast<long double>();
     std::vector<double> sigma;
     std::vector<std::vector<std::complex<double>>> perShift;
     for (int k = 0; k < shifts; ++k) {
@@ -103,54 +269,68 @@ PencilRoots finitePencilRoots(const PencilRootProblem& problem, OriginRootBounds
         throw std::runtime_error("the network's nodal matrix is singular at every trial frequency");
     shifts = static_cast<int>(sigma.size());
 
-    // Each root from the highest shift at or below it. Above a root, σ·C
-    // swamps the conductances when A(σ) is formed and their digits are lost;
-    // below it, the error grows only as ε·|r|/σ, at most 10^kDecadesPerShift.
-    // The top shift's list (every finite root, roughly) says which shift
-    // that is; the value is that shift's nearest root.
+    // Every shift sees nearly every root; a root's error depends on the shift
+    // (on where σ·C swamps the conductances, and on the eigenproblem's
+    // conditioning there), and a root that comes out the same at two shifts
+    // is one those errors did not touch: rounding noise (an infinite or a
+    // multiple origin root split by it) moves with σ. So each root is
+    // followed down the shifts as a track, and its value is taken where two
+    // neighbouring shifts agree best.
+    const std::vector<RootTrack> tracks = followRoots(perShift);
+
     std::vector<std::complex<double>> roots;
-    std::vector<std::vector<bool>> used(shifts);
-    for (int k = 0; k < shifts; ++k)
-        used[k].assign(perShift[k].size(), false);
-    for (const auto& estimate : perShift.back()) {
-        int k = 0;
-        while (k + 1 < shifts && sigma[k + 1] <= std::abs(estimate))
-            ++k;
-        int best = -1;
-        for (int i = 0; i < static_cast<int>(perShift[k].size()); ++i)
-            if (!used[k][i] && (best < 0 || std::abs(perShift[k][i] - estimate) < std::abs(perShift[k][best] - estimate)))
-                best = i;
-        if (best < 0) {  // the lower shift saw this root as infinite: keep the estimate
-            roots.push_back(estimate);
+    std::vector<bool> confirmed;
+    for (const RootTrack& track : tracks) {
+        const Settled settled = settle(track, sigma);
+        // Seen at one shift only, or nowhere twice alike, and above the top
+        // shift: rounding noise of an infinite root.
+        if (!settled.confirmed && shifts > 1 && std::abs(settled.value) > sigma.back())
             continue;
+        roots.push_back(settled.value);
+        confirmed.push_back(settled.confirmed);
+    }
+
+    std::vector<int> order(roots.size());
+    for (int i = 0; i < static_cast<int>(order.size()); ++i)
+        order[i] = i;
+    std::sort(order.begin(), order.end(), [&](int x, int y) { return std::abs(roots[x]) < std::abs(roots[y]); });
+    {
+        std::vector<std::complex<double>> sortedRoots;
+        std::vector<bool> sortedConfirmed;
+        for (int i : order) {
+            sortedRoots.push_back(roots[i]);
+            sortedConfirmed.push_back(confirmed[i]);
         }
-        used[k][best] = true;
-        roots.push_back(perShift[k][best]);
+        roots = std::move(sortedRoots);
+        confirmed = std::move(sortedConfirmed);
     }
-
-    auto seenAt = [&](int k, std::complex<double> r) {
-        for (const auto& other : perShift[k])
-            if (std::abs(other - r) <= kSameRoot * std::abs(r))
-                return true;
-        return false;
-    };
-    // Above the top shift a root must be seen by the shift below too.
-    if (shifts > 1)
-        roots.erase(std::remove_if(roots.begin(), roots.end(),
-                                   [&](auto r) { return std::abs(r) > sigma.back() && !seenAt(shifts - 2, r); }),
-                    roots.end());
-
-    std::sort(roots.begin(), roots.end(), [](auto x, auto y) { return std::abs(x) < std::abs(y); });
-    int originRoots = origin.atLeast;
-    if (origin.atMost > origin.atLeast) {
-        while (originRoots < origin.atMost && originRoots < static_cast<int>(roots.size()) &&
-               std::abs(roots[originRoots]) < kOriginCluster * low)
-            ++originRoots;
-    }
-    for (int i = 0; i < originRoots && i < static_cast<int>(roots.size()); ++i)
+    // The certain origin roots are the smallest ones; above that count, a
+    // small root is taken as rounding around the origin only if no two
+    // shifts agree on it (a genuinely slow root is reproduced, the split of
+    // a multiple root at 0 scales with σ).
+    int originRoots = std::min<int>(origin.atLeast, static_cast<int>(roots.size()));
+    while (originRoots < origin.atMost && originRoots < static_cast<int>(roots.size()) &&
+           !confirmed[originRoots] && std::abs(roots[originRoots]) < kOriginCluster * low)
+        ++originRoots;
+    for (int i = 0; i < originRoots; ++i)
         roots[i] = 0.0;
-    // Real matrices give real roots or conjugate pairs; rounding in σ − 1/μ
-    // leaves the pairs exact, so only clean signed zeros.
+    // Real matrices give real roots or conjugate pairs. One shift's pair is
+    // exact, but the two tracks of a pair may settle at different shifts:
+    // each root in the upper half plane gives its value to its partner.
+    std::vector<bool> paired(roots.size(), false);
+    for (size_t i = 0; i < roots.size(); ++i) {
+        if (roots[i].imag() <= 0.0)
+            continue;
+        int partner = -1;
+        for (size_t j = 0; j < roots.size(); ++j)
+            if (!paired[j] && roots[j].imag() < 0.0 &&
+                (partner < 0 || std::abs(roots[j] - std::conj(roots[i])) < std::abs(roots[partner] - std::conj(roots[i]))))
+                partner = static_cast<int>(j);
+        if (partner >= 0) {
+            paired[partner] = true;
+            roots[partner] = std::conj(roots[i]);
+        }
+    }
     for (auto& r : roots)
         if (r.imag() == 0.0)
             r = {r.real(), 0.0};

@@ -12,11 +12,14 @@ namespace tauline {
 // For a shift σ where A(σ) is regular, det A(s) = det A(σ)·det(I + (s−σ)·K)
 // with K = cap^½·Pᵀ·A(σ)⁻¹·P·cap^½ (capacitor-count square), so every finite
 // root is σ − 1/μ for an eigenvalue μ ≠ 0 of K. A root r comes out with
-// relative error that grows with its distance from σ: each root is
-// therefore taken from a shift just below it on a log grid spanning the
-// network's time scales, which keeps roots spread over many decades accurate.
+// relative error that depends on the shift: the roots are computed at every
+// shift of a log grid spanning the network's time scales, followed from
+// shift to shift, and each is taken where two neighbouring shifts agree
+// best (see the .cpp), which keeps roots spread over many decades accurate.
 struct PencilRootProblem {
     Eigen::MatrixXd a0;
+    // a0 with its entries summed in extended precision; empty: a0 itself.
+    Eigen::Matrix<long double, Eigen::Dynamic, Eigen::Dynamic> a0Extended;
     Eigen::MatrixXd ports;        // P
     Eigen::VectorXd capacitance;  // positive
     bool symmetric = false;       // A0 symmetric: use the self-adjoint solver
