@@ -48,15 +48,28 @@ std::vector<Eigen::VectorXd> floatingVectors(const std::vector<int>& labels, int
 PortResistance portResistance(const NodalModel& model, Eigen::MatrixXd m, const std::vector<int>& labels)
 {
     PortResistance out;
-    for (const auto& w : floatingVectors(labels, static_cast<int>(m.rows())))
+    // The same matrix with G's entries summed in extended precision: a null
+    // resistance that is exactly zero (a port the nulling shorts) is a
+    // cancellation of node voltages, and only refinement against the exact
+    // sums, with the last correction kept apart, brings it to rounding of
+    // the result rather than of the voltages.
+    using Extended = long double;
+    Eigen::Matrix<Extended, Eigen::Dynamic, Eigen::Dynamic> exact = m.cast<Extended>();
+    exact.topLeftCorner(model.unknowns(), model.unknowns()) = model.extendedG;
+    for (const auto& w : floatingVectors(labels, static_cast<int>(m.rows()))) {
         m += w * w.transpose();
-    const EquilibratedLu<double> lu(m);
+        exact += (w * w.transpose()).cast<Extended>();
+    }
+    const EquilibratedLu<double> lu(m, exact);
     if (!lu.regular())
         return out;
     const int n = model.capacitorCount();
     Eigen::MatrixXd p = Eigen::MatrixXd::Zero(m.rows(), n);
     p.topRows(model.unknowns()) = model.ports;
-    out.r = p.transpose() * lu.solve(p);
+    const Eigen::MatrixXd x = lu.solve(p);
+    const Eigen::MatrixXd correction = lu.solve(lu.residual(p, x).cast<double>(), 0);
+    const auto pExt = p.cast<Extended>();
+    out.r = (pExt.transpose() * (x.cast<Extended>() + correction.cast<Extended>())).cast<double>();
     out.finite.resize(n);
     for (int i = 0; i < n; ++i) {
         const auto& nodes = model.capacitorNodes[i];

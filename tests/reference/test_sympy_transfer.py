@@ -59,7 +59,11 @@ DISAGREED_ONCE = (2010, 2032, 2046, 2085, 2139, 2253, 2258, 2307, 2378, 2388,
                   # a run over seeds 40000-40999: zeros and the gain constant
                   # 1e-9..1e-8 off; a pole-zero pair left uncancelled when a
                   # low root was taken from two high shifts
-                  40171, 40296, 40877, 40972)
+                  40171, 40296, 40877, 40972,
+                  # the same run: null time constants 2e-9 off, or rounding
+                  # where the nulling shorts a port (port resistances now
+                  # refined against extended-precision sums)
+                  40647, 40844)
 
 
 def compare_coefficients(case, name, engine, ref, omega0):
