@@ -23,6 +23,9 @@ class TimeConstantTable;
 // The editor: the canvas with the Bode plot beside it, the corners and time
 // constants below, the inspector at the side. Every edit of the drawing
 // re-runs the analysis and redraws the plot and tables.
+// One class, its definitions split by job: MainWindow.cpp wires the parts
+// together; the other MainWindow*.cpp files are named after what they do
+// (menus and actions live in MainWindowMenus.cpp).
 class MainWindow : public QMainWindow {
     Q_OBJECT
 public:
@@ -63,33 +66,45 @@ protected:
     void showEvent(QShowEvent* event) override;
 
 private:
+    // MainWindowLayout.cpp: the widgets, their arrangement, settings, title.
     void buildViews();
-    void buildActions();
     void restoreSettings();
     void saveSettings() const;
+    void updateTitle();
+    void updateCaution();
+    void setStatus(const QString& text, bool problem);
 
+    // MainWindowMenus.cpp: every menu, toolbar and action (add new ones there).
+    void buildActions();
+    void buildFileMenu();
+    void buildEditMenu();
+    void buildDrawMenu();
+    void buildViewMenu();
+    void buildHelpMenu();
+    void buildToolBars();
+    void about();
+
+    // MainWindowFileActions.cpp: new, open, save, recent files.
     bool maybeSave();
     void newFile();
     void openWithDialog();
     bool save();
     bool saveAs();
+    void addRecentFile(const QString& path);
+    void rebuildRecentMenu();
+
+    // MainWindowPlotActions.cpp: export and the frequency range.
     void exportPlot(bool svg);
     void chooseFrequencyRange();
     void fitFrequencyRange();
-    void about();
 
-    void addRecentFile(const QString& path);
-    void rebuildRecentMenu();
-    void updateTitle();
-    void updateCaution();
-
+    // MainWindowAnalysis.cpp: from an edit to the plot and tables.
     void scheduleAnalysis();
     void showOutcome(std::shared_ptr<const AnalysisOutcome> outcome);
     void showSensitivities(quint64 generation,
                            std::shared_ptr<const std::vector<tauline::CornerSensitivity>> s);
     void showCleared(const QString& reason);
     void cornerSelected(int index, const QStringList& parts);
-    void setStatus(const QString& text, bool problem);
 
     SchematicDocument* document_ = nullptr;
     AnalysisRunner* runner_ = nullptr;
@@ -101,7 +116,19 @@ private:
     QSplitter* splitter_ = nullptr;
     QLabel* banner_ = nullptr;
     QLabel* status_ = nullptr;
+    QMenu* fileMenu_ = nullptr;
+    QMenu* editMenu_ = nullptr;
+    QMenu* drawMenu_ = nullptr;
+    QMenu* viewMenu_ = nullptr;
+    QMenu* helpMenu_ = nullptr;
     QMenu* recentMenu_ = nullptr;
+    // Shared by the menus and the main toolbar.
+    QAction* newAction_ = nullptr;
+    QAction* openAction_ = nullptr;
+    QAction* saveAction_ = nullptr;
+    QAction* svgAction_ = nullptr;
+    QAction* undoAction_ = nullptr;
+    QAction* redoAction_ = nullptr;
     QAction* phaseAction_ = nullptr;
     QAction* fitAction_ = nullptr;
     bool analysisScheduled_ = false;

@@ -2,6 +2,11 @@
 // (select and move, draw wires, place symbols), in-place editors, and the
 // derived decorations (junction dots, problem marks). Every change the user
 // makes goes through the document's undo stack as a command.
+// One class, its definitions split by job: SchematicScene.cpp (the items
+// and what is derived from them), SchematicSceneTools (tools, placing),
+// ...Wires, ...Moves (move, rotate, mirror), ...Clipboard (delete, copy,
+// paste), ...Editors (in-place editors), ...Values (value stepping),
+// ...Mouse (mouse and keys), ...HitTests, ...Background (the grid).
 #pragma once
 
 #include "Connectivity.h"
