@@ -1,6 +1,8 @@
 #include "CornerSensitivity.h"
 
 #include "Errors.h"
+#include "NodalModel.h"
+#include "RootSensitivity.h"
 
 #include <algorithm>
 #include <cmath>
@@ -47,16 +49,37 @@ std::optional<std::vector<Breakpoint>> cornersWithScaledPart(Network network, st
     }
 }
 
-}  // namespace
+// Exact sensitivities below this are rounding in the null vectors: no
+// dependence.
+constexpr double kNoDependence = 1e-10;
 
-std::vector<CornerSensitivity> cornerSensitivities(const Network& network, const Analysis& base,
-                                                   double step,
-                                                   const std::function<bool()>& keepGoing)
+// Two roots of one kind this close (relative) are one double root.
+constexpr double kDoubleRoot = 1e-7;
+
+bool onDoubleRoot(const Analysis& base, const Breakpoint& corner)
+{
+    const auto& roots = corner.type == RootType::Pole ? base.poles : base.zeros;
+    int near = 0;
+    for (const auto& r : roots)
+        if (std::abs(r - corner.root) <= kDoubleRoot * std::abs(corner.root))
+            ++near;
+    return near > 1;
+}
+
+void sortByMagnitude(CornerSensitivity& corner)
+{
+    std::stable_sort(corner.parts.begin(), corner.parts.end(),
+                     [](const PartSensitivity& a, const PartSensitivity& b) {
+                         return std::abs(a.value) > std::abs(b.value);
+                     });
+}
+
+// Central differences for the corners flagged in `wanted` only.
+void centralDifferences(const Network& network, const Analysis& base, double step,
+                        const std::function<bool()>& keepGoing, const std::vector<bool>& wanted,
+                        std::vector<CornerSensitivity>& result)
 {
     const auto& corners = base.breakpoints;
-    std::vector<CornerSensitivity> result(corners.size());
-    if (corners.empty())
-        return result;
     const std::vector<int> rank = rankWithinType(corners);
     const double lnStep = std::log1p(step) - std::log1p(-step);
 
@@ -68,6 +91,8 @@ std::vector<CornerSensitivity> cornerSensitivities(const Network& network, const
         if (!up || !down)
             continue;
         for (std::size_t c = 0; c < corners.size(); ++c) {
+            if (!wanted[c])
+                continue;
             const auto fUp = cornerHz(*up, corners[c].type, rank[c]);
             const auto fDown = cornerHz(*down, corners[c].type, rank[c]);
             if (!fUp || !fDown || *fUp <= 0.0 || *fDown <= 0.0)
@@ -79,12 +104,79 @@ std::vector<CornerSensitivity> cornerSensitivities(const Network& network, const
             result[c].parts.push_back({network.parts[p].name, s});
         }
     }
+}
+
+}  // namespace
+
+std::vector<CornerSensitivity> finiteDifferenceSensitivities(const Network& network, const Analysis& base,
+                                                             double step, const std::function<bool()>& keepGoing)
+{
+    std::vector<CornerSensitivity> result(base.breakpoints.size());
     for (auto& corner : result)
-        std::stable_sort(corner.parts.begin(), corner.parts.end(),
-                         [](const PartSensitivity& a, const PartSensitivity& b) {
-                             return std::abs(a.value) > std::abs(b.value);
-                         });
+        corner.method = SensitivityMethod::FiniteDifference;
+    if (result.empty())
+        return result;
+    centralDifferences(network, base, step, keepGoing, std::vector<bool>(result.size(), true), result);
+    for (auto& corner : result)
+        sortByMagnitude(corner);
     return result;
+}
+
+std::vector<CornerSensitivity> cornerSensitivities(const Network& network, const Analysis& base, double step,
+                                                   const std::function<bool()>& keepGoing)
+{
+    const auto& corners = base.breakpoints;
+    std::vector<CornerSensitivity> result(corners.size());
+    if (corners.empty())
+        return result;
+    const NodalModel model = buildNodalModel(network);
+    const std::vector<PartStamp> stamps = partStamps(model, network);
+
+    std::vector<std::optional<std::vector<std::complex<double>>>> derivatives(corners.size());
+    std::vector<bool> fallback(corners.size(), false);
+    for (std::size_t c = 0; c < corners.size(); ++c) {
+        if (onDoubleRoot(base, corners[c])) {
+            result[c].note = "a double root: the exact derivative does not exist (the roots move as the "
+                             "square root of a change); central differences shown";
+        } else {
+            derivatives[c] = rootDerivatives(model, stamps, corners[c].type, corners[c].root);
+            if (!derivatives[c])
+                result[c].note = "the root's null vectors could not be resolved (a double root, or nearly); "
+                                 "central differences shown";
+        }
+        fallback[c] = !derivatives[c];
+        if (fallback[c])
+            result[c].method = SensitivityMethod::FiniteDifference;
+    }
+
+    for (std::size_t p = 0; p < network.parts.size(); ++p) {
+        if (keepGoing && !keepGoing())
+            return result;
+        for (std::size_t c = 0; c < corners.size(); ++c) {
+            if (!derivatives[c])
+                continue;
+            double s = normalisedCornerSensitivity(corners[c].root, (*derivatives[c])[p]);
+            if (std::abs(s) < kNoDependence)
+                s = 0.0;
+            result[c].parts.push_back({network.parts[p].name, s});
+        }
+    }
+    if (std::find(fallback.begin(), fallback.end(), true) != fallback.end())
+        centralDifferences(network, base, step, keepGoing, fallback, result);
+    for (auto& corner : result)
+        sortByMagnitude(corner);
+    return result;
+}
+
+std::optional<double> exactCornerSensitivity(const Network& network, const Breakpoint& corner, std::size_t part)
+{
+    if (part >= network.parts.size())
+        return std::nullopt;
+    const NodalModel model = buildNodalModel(network);
+    const auto d = rootDerivatives(model, partStamps(model, network), corner.type, corner.root);
+    if (!d)
+        return std::nullopt;
+    return normalisedCornerSensitivity(corner.root, (*d)[part]);
 }
 
 std::vector<PartSensitivity> dominantParts(const CornerSensitivity& corner, double fraction,

@@ -2,11 +2,14 @@
 
 #include "PolylineClip.h"
 #include "QuantityText.h"
+#include "ReferenceCurve.h"
+#include "StraightLineSketch.h"
 
 #include <QCoreApplication>
 #include <QFont>
 #include <QGraphicsLayout>
 #include <QGraphicsSimpleTextItem>
+#include <QLineF>
 #include <QPen>
 #include <QtCharts/QCategoryAxis>
 #include <QtCharts/QLegendMarker>
@@ -60,6 +63,21 @@ std::vector<double> decibelSteps()
         for (double m : {1.0, 2.0, 5.0})
             steps.push_back(m * decade);
     return steps;
+}
+
+// Qt Charts lays the whole chart out again and rebuilds every axis label on
+// any axis setter, even one that changes nothing (setLabelFormat always
+// does): while a value is dragged the ticks rarely change, so only a real
+// change is passed on.
+void setTicks(QValueAxis* axis, const Ticks& t, const QString& format)
+{
+    if (axis->min() != t.lo || axis->max() != t.hi)
+        axis->setRange(t.lo, t.hi);
+    const int count = static_cast<int>(std::lround((t.hi - t.lo) / t.step)) + 1;
+    if (axis->tickCount() != count)
+        axis->setTickCount(count);
+    if (axis->labelFormat() != format)
+        axis->setLabelFormat(format);
 }
 
 void hideLegendMarker(QChart* chart, QAbstractSeries* series)
@@ -151,6 +169,8 @@ BodeChart::BodeChart(QGraphicsItem* parent) : QChart(parent)
         return s;
     };
     minorGrid_ = line(QString(), QPen(QColor(0xec, 0xee, 0xf2), 1), magnitudeAxis_);
+    // Added before the curves so it draws under them.
+    reference_ = new ReferenceCurve(this, frequencyAxis_, magnitudeAxis_);
     phase_ = line(tr("Phase"), curvePen(phaseColor(), 1.4, false), phaseAxis_);
     QPen sketchPen(sketchColor(), 1.8, Qt::DashLine);
     sketch_ = line(tr("Straight-line sketch"), sketchPen, magnitudeAxis_);
@@ -227,6 +247,13 @@ void BodeChart::setUserRange(std::optional<std::pair<double, double>> rangeHz)
         rebuild();
 }
 
+void BodeChart::setPairsAsOneCorner(bool on)
+{
+    pairsAsOneCorner_ = on;
+    if (analysis_)
+        rebuild();
+}
+
 void BodeChart::setPhaseVisible(bool visible)
 {
     phaseVisible_ = visible;
@@ -255,7 +282,8 @@ std::optional<BodeChart::Reading> BodeChart::readingAt(double hz) const
     Reading r;
     r.hz = hz;
     r.exactDb = 20.0 * std::log10(std::abs(h));
-    r.sketchDb = tauline::sketchDb(*analysis_, hz);
+    r.sketchDb = tauline::sketchDb(
+        *analysis_, pairsAsOneCorner_ ? tauline::lowQPairs(*analysis_) : std::vector<tauline::LowQPair>{}, hz);
     r.phaseDeg = std::arg(h) * 180.0 / std::numbers::pi;
     return r;
 }
@@ -269,6 +297,24 @@ std::optional<double> BodeChart::frequencyAt(const QPointF& scenePos) const
         return std::nullopt;
     const QPointF value = const_cast<BodeChart*>(this)->mapToValue(local, sketch_);
     return std::pow(10.0, value.x());
+}
+
+std::optional<int> BodeChart::cornerAt(const QPointF& scenePos, qreal radius) const
+{
+    if (!analysis_)
+        return std::nullopt;
+    const QPointF local = mapFromScene(scenePos);
+    std::optional<int> best;
+    qreal bestDistance = radius;
+    for (const auto& [index, point] : markerPoints_) {
+        const QPointF at = const_cast<BodeChart*>(this)->mapToPosition(point, sketch_);
+        const qreal d = QLineF(at, local).length();
+        if (d <= bestDistance) {
+            bestDistance = d;
+            best = index;
+        }
+    }
+    return best;
 }
 
 QList<double> BodeChart::sampleHz(double fromHz, double toHz) const
@@ -297,7 +343,7 @@ void BodeChart::rebuild()
     if (!analysis_)
         return;
     const tauline::Analysis& a = *analysis_;
-    rangeHz_ = userRange_ ? *userRange_ : tauline::suggestedRangeHz(a);
+    rangeHz_ = userRange_ ? *userRange_ : reference_->coveringRange(tauline::suggestedRangeHz(a));
     const double lo = std::log10(rangeHz_.first);
     const double hi = std::log10(rangeHz_.second);
 
@@ -309,12 +355,16 @@ void BodeChart::rebuild()
     for (const auto& p : points)
         exact.append({std::log10(p.hz), p.db});
     QList<QPointF> sketch;
-    for (const auto& v : tauline::sketchPolyline(a, rangeHz_.first, rangeHz_.second))
+    const std::vector<tauline::LowQPair> pairs = pairsAsOneCorner_ ? tauline::lowQPairs(a)
+                                                                   : std::vector<tauline::LowQPair>{};
+    for (const auto& v : tauline::sketchPolyline(a, pairs, rangeHz_.first, rangeHz_.second))
         sketch.append({std::log10(v.hz), v.db});
+
+    QList<QPointF> reference = reference_->points(hzList);
 
     double yMin = std::numeric_limits<double>::infinity();
     double yMax = -yMin;
-    for (const auto* list : {&exact, &sketch})
+    for (const auto* list : {&exact, &sketch, &reference})
         for (const QPointF& p : *list)
             if (std::isfinite(p.y())) {
                 yMin = std::min(yMin, p.y());
@@ -327,15 +377,14 @@ void BodeChart::rebuild()
     yMin = std::max(yMin, yMax - kMaxMagnitudeSpanDb);
     const double pad = std::max(2.0, 0.06 * (yMax - yMin));
     const Ticks y = niceTicks(yMin - pad, yMax + pad, 9, decibelSteps());
-    magnitudeAxis_->setRange(y.lo, y.hi);
-    magnitudeAxis_->setTickCount(static_cast<int>(std::lround((y.hi - y.lo) / y.step)) + 1);
-    magnitudeAxis_->setLabelFormat(y.step < 1.0 ? QStringLiteral("%.1f") : QStringLiteral("%.0f"));
+    setTicks(magnitudeAxis_, y, y.step < 1.0 ? QStringLiteral("%.1f") : QStringLiteral("%.0f"));
     magnitudeAxis_->setTitleText(tr("Magnitude (%1)").arg(decibelUnit(a.kind)));
 
     rebuildFrequencyAxis(lo, hi);
     const QRectF box(QPointF(lo, y.lo), QPointF(hi, y.hi));
     setPieces(exact_, exactExtras_, clipPolyline(exact, box), magnitudeAxis_);
     setPieces(sketch_, sketchExtras_, clipPolyline(sketch, box), magnitudeAxis_);
+    reference_->draw(reference, box);
 
     phase_->setVisible(phaseVisible_);
     phaseAxis_->setVisible(phaseVisible_);
@@ -348,8 +397,7 @@ void BodeChart::rebuild()
             pMax = std::max(pMax, p.y());
         }
         const Ticks t = niceTicks(pMin, pMax, 9, {15.0, 30.0, 45.0, 90.0, 180.0, 360.0});
-        phaseAxis_->setRange(t.lo, t.hi);
-        phaseAxis_->setTickCount(static_cast<int>(std::lround((t.hi - t.lo) / t.step)) + 1);
+        setTicks(phaseAxis_, t, phaseAxis_->labelFormat());
         setPieces(phase_, phaseExtras_, clipPolyline(phase, QRectF(QPointF(lo, t.lo), QPointF(hi, t.hi))),
                   phaseAxis_);
     } else {
@@ -362,7 +410,7 @@ void BodeChart::rebuild()
     QList<QPointF> zeros;
     for (std::size_t i = 0; i < a.breakpoints.size(); ++i) {
         const auto& corner = a.breakpoints[i];
-        const QPointF p(std::log10(corner.hz), tauline::sketchDb(a, corner.hz));
+        const QPointF p(std::log10(corner.hz), tauline::sketchDb(a, pairs, corner.hz));
         if (pointsInside({p}, box).isEmpty())
             continue;
         markerPoints_.emplace_back(static_cast<int>(i), p);
@@ -388,6 +436,28 @@ void BodeChart::rebuild()
     minorGrid_->replace(grid);
 
     setHighlightedCorner(highlighted_);
+}
+
+void BodeChart::keepReference()
+{
+    if (!analysis_)
+        return;
+    reference_->keep(*analysis_);
+    rebuild();
+}
+
+void BodeChart::dismissReference()
+{
+    if (!reference_->isKept())
+        return;
+    reference_->dismiss();
+    if (analysis_)
+        rebuild();
+}
+
+bool BodeChart::hasReference() const
+{
+    return reference_->isKept();
 }
 
 void BodeChart::rebuildFrequencyAxis(double lo, double hi)
@@ -427,6 +497,7 @@ void BodeChart::clearCurves()
     poleMarkers_->clear();
     zeroMarkers_->clear();
     highlightMarker_->clear();
+    reference_->clear();
     markerPoints_.clear();
     phaseAxis_->setVisible(phaseVisible_);
 }

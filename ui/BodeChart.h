@@ -18,6 +18,8 @@ class QValueAxis;
 
 namespace tauline::ui {
 
+class ReferenceCurve;
+
 // The Bode chart of one analysis: the exact magnitude, the straight-line
 // sketch (dashed), every corner marked and labelled, and the phase when asked
 // for. The frequency axis is logarithmic: series hold x = log10(f / Hz) on a
@@ -42,6 +44,11 @@ public:
     void setPhaseVisible(bool visible);
     bool isPhaseVisible() const { return phaseVisible_; }
 
+    // Draw two corners too close for their estimates as one ±40 dB/decade
+    // corner (StraightLineSketch.h); off: one corner per exact root.
+    void setPairsAsOneCorner(bool on);
+    bool pairsAsOneCorner() const { return pairsAsOneCorner_; }
+
     // The breakpoint (index into analysis().breakpoints) to emphasise, or -1.
     void setHighlightedCorner(int index);
     int highlightedCorner() const { return highlighted_; }
@@ -56,6 +63,15 @@ public:
     std::optional<Reading> readingAt(double hz) const;
     // Scene position -> frequency, if the position is over the plot area.
     std::optional<double> frequencyAt(const QPointF& scenePos) const;
+    // The corner whose marker lies within `radius` pixels of a scene
+    // position (the nearest), for dragging a corner along the axis.
+    std::optional<int> cornerAt(const QPointF& scenePos, qreal radius = 8.0) const;
+
+signals:
+    // A corner's marker was dragged to a new frequency (PlacementDrag).
+    void cornerDragged(int index, double hz);
+
+public:
 
     // The series, for export and tests.
     QLineSeries* exactSeries() const { return exact_; }
@@ -70,6 +86,14 @@ public:
     static QColor exactColor();
     static QColor sketchColor();
     static QColor phaseColor();
+
+    // An earlier curve to compare with: keepReference() keeps the analysis
+    // shown now, drawn faintly until dismissReference(); later analyses,
+    // ranges and messages leave it in place.
+    void keepReference();
+    void dismissReference();
+    bool hasReference() const;
+    ReferenceCurve* reference() const { return reference_; }
 
     // Curves as single paths (for SVG export) rather than the cheaper
     // segment-by-segment drawing used on screen.
@@ -93,6 +117,7 @@ private:
     std::optional<std::pair<double, double>> userRange_;
     std::pair<double, double> rangeHz_{10.0, 1e6};
     bool phaseVisible_ = false;
+    bool pairsAsOneCorner_ = false;
     int highlighted_ = -1;
 
     QCategoryAxis* frequencyAxis_ = nullptr;
@@ -112,6 +137,7 @@ private:
     std::vector<std::pair<int, QPointF>> markerPoints_;
     QList<QGraphicsSimpleTextItem*> labels_;
     QGraphicsSimpleTextItem* messageItem_ = nullptr;
+    ReferenceCurve* reference_ = nullptr;
 };
 
 }  // namespace tauline::ui

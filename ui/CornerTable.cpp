@@ -1,7 +1,9 @@
 #include "CornerTable.h"
 
+#include "LowQPair.h"
 #include "QuantityText.h"
 
+#include <QAction>
 #include <QHeaderView>
 
 #include <cmath>
@@ -62,6 +64,14 @@ CornerTable::CornerTable(QWidget* parent) : QTableWidget(parent)
     setColumnWidth(ErrorColumn, 62);
     setColumnWidth(SeparationColumn, 84);
     connect(this, &QTableWidget::itemSelectionChanged, this, &CornerTable::emitSelection);
+    auto* place = new QAction(tr("&Place This Corner…"), this);
+    place->setObjectName(QStringLiteral("placeThisCornerAction"));
+    connect(place, &QAction::triggered, this, [this] {
+        if (selectedCorner() >= 0)
+            emit placementRequested(selectedCorner());
+    });
+    addAction(place);
+    setContextMenuPolicy(Qt::ActionsContextMenu);
 }
 
 void CornerTable::setAnalysis(const tauline::Analysis& analysis)
@@ -100,6 +110,21 @@ void CornerTable::setAnalysis(const tauline::Analysis& analysis)
         parts->setToolTip(tr("Working out which parts set this corner…"));
         setItem(row, PartsColumn, parts);
     }
+    // Close pairs read as one quadratic (LowQPair.h): where that lands.
+    for (const auto& pair : tauline::lowQPairs(analysis)) {
+        QString tip = tr("Read with its neighbour as one quadratic: f0 = %1, Q = %2.\n"
+                         "Simple estimates off by %3 and %4.")
+                          .arg(frequencyText(pair.omega0Hz()))
+                          .arg(pair.q, 0, 'f', 3)
+                          .arg(percentText(pair.estimateLowError), percentText(pair.estimateHighError));
+        if (pair.quadraticLowHz)
+            tip += tr("\nThe quadratic's roots f0·Q/F, f0·F/Q: %1 and %2 (%3, %4 off).")
+                       .arg(frequencyText(*pair.quadraticLowHz), frequencyText(*pair.quadraticHighHz),
+                            percentText(*pair.quadraticLowError), percentText(*pair.quadraticHighError));
+        for (int row : {pair.lowBreakpoint, pair.highBreakpoint})
+            if (QTableWidgetItem* separation = item(row, SeparationColumn))
+                separation->setToolTip(tip);
+    }
     if (keep >= 0 && keep < rowCount())
         selectRow(keep);
     block.unblock();
@@ -124,11 +149,19 @@ void CornerTable::setSensitivities(const std::vector<tauline::CornerSensitivity>
                 all << QStringLiteral("%1: %2").arg(QString::fromStdString(part.part),
                                                     sensitivityText(part.value));
         parts_[row] = names;
-        auto* item = cell(shown.isEmpty() ? tr("—") : shown.join(QStringLiteral(", ")));
+        // A double root has no exact derivative: the values are differences.
+        const bool exact = sensitivities[row].method == tauline::SensitivityMethod::Exact;
+        QString text = shown.isEmpty() ? tr("—") : shown.join(QStringLiteral(", "));
+        if (!exact && !shown.isEmpty())
+            text.prepend(QStringLiteral("≈ "));
+        auto* item = cell(text);
         item->setData(PartsRole, names);
-        item->setToolTip(all.isEmpty() ? tr("No part moves this corner.")
-                                       : tr("d ln f / d ln x for every part that moves it:\n")
-                                             + all.join(QLatin1Char('\n')));
+        QString tip = all.isEmpty() ? tr("No part moves this corner.")
+                                    : tr("d ln f / d ln x for every part that moves it:\n")
+                                          + all.join(QLatin1Char('\n'));
+        if (!exact)
+            tip += QStringLiteral("\n≈ ") + QString::fromStdString(sensitivities[row].note);
+        item->setToolTip(tip);
         setItem(row, PartsColumn, item);
     }
     if (selectedCorner() >= 0)

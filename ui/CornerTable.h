@@ -37,6 +37,9 @@ public:
 signals:
     // index -1 when the selection is cleared.
     void cornerSelected(int index, const QStringList& parts);
+    // "Place This Corner…" from the context menu (an action of the table,
+    // shown with the table's other actions), for the selected corner.
+    void placementRequested(int index);
 
 private:
     void emitSelection();

@@ -1,8 +1,13 @@
 #include "TimeConstantTable.h"
 
+#include "FactoredForm.h"
 #include "QuantityText.h"
 
+#include <QAction>
+#include <QApplication>
+#include <QClipboard>
 #include <QHeaderView>
+#include <QLabel>
 #include <QSet>
 
 #include <map>
@@ -12,7 +17,10 @@ namespace tauline::ui {
 TimeConstantTable::TimeConstantTable(QWidget* parent) : QTreeWidget(parent)
 {
     setColumnCount(ColumnCount);
-    setHeaderLabels({tr("Part"), tr("τ"), tr("R seen"), tr("τ nulled"), tr("R nulled")});
+    setHeaderLabels({tr("Part"), tr("τ"), tr("R seen"), tr("τ nulled"), tr("R nulled"), tr("τ in part names"),
+                     tr("τ nulled in part names")});
+    headerItem()->setToolTip(ExpressionColumn, tr("The resistance seen, reduced series–parallel; "
+                                                  "“bridge(…)” where it is not series–parallel"));
     headerItem()->setToolTip(TauColumn, tr("Time constant with the other capacitors open and "
                                            "the input zeroed"));
     headerItem()->setToolTip(NullTauColumn, tr("Time constant with the response nulled (for an "
@@ -26,6 +34,111 @@ TimeConstantTable::TimeConstantTable(QWidget* parent) : QTreeWidget(parent)
     setColumnWidth(TauColumn, 66);
     setColumnWidth(ResistanceColumn, 66);
     setColumnWidth(NullTauColumn, 66);
+    setColumnWidth(NullResistanceColumn, 66);
+    setColumnWidth(ExpressionColumn, 160);
+
+    factored_ = new QLabel;
+    factored_->setTextFormat(Qt::PlainText);
+    // Not mouse-selectable: a selectable label re-lays its text out as a
+    // document on every edit, which cost a third of the edit-to-redrawn
+    // time; Copy as Text (also on the label's own menu) copies it instead.
+    factored_->setWordWrap(true);
+    factored_->setObjectName(QStringLiteral("factoredForm"));
+
+    auto* copy = new QAction(tr("Copy as Text"), this);
+    copy->setShortcut(QKeySequence::Copy);
+    copy->setShortcutContext(Qt::WidgetWithChildrenShortcut);
+    connect(copy, &QAction::triggered, this, &TimeConstantTable::copyAsText);
+    addAction(copy);
+    setContextMenuPolicy(Qt::ActionsContextMenu);
+    factored_->addAction(copy);
+    factored_->setContextMenuPolicy(Qt::ActionsContextMenu);
+}
+
+TimeConstantTable::~TimeConstantTable()
+{
+    if (factored_ && !factored_->parent())
+        delete factored_;
+}
+
+void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis, const tauline::Network& network)
+{
+    setAnalysis(analysis);
+    const auto& expressions = expressionsFor(analysis, network);
+    const bool nullUndefined = analysis.kind != ResponseKind::Impedance && analysis.dc.kind != LimitKind::Finite;
+    for (int i = 0; i < topLevelItemCount() && i < static_cast<int>(expressions.size()); ++i) {
+        QTreeWidgetItem* row = topLevelItem(i);
+        const auto& e = expressions[i];
+        row->setText(ExpressionColumn, QString::fromStdString(e.tauText()));
+        row->setText(NullExpressionColumn, nullUndefined && !analysis.timeConstants[i].tauNull
+                                               ? kUndefinedText
+                                               : QString::fromStdString(e.nullTauText()));
+        // The narrow dock may hide the expression columns: the τ cells say it too.
+        row->setToolTip(TauColumn, tr("τ = %1 = %2").arg(row->text(ExpressionColumn), row->text(TauColumn)));
+        row->setToolTip(NullTauColumn,
+                        tr("τ nulled = %1 = %2").arg(row->text(NullExpressionColumn), row->text(NullTauColumn)));
+        const bool bridge = (e.seen && !e.seen->seriesParallel()) || (e.nulled && !e.nulled->seriesParallel());
+        row->setToolTip(ExpressionColumn, bridge ? tr("Not series–parallel: the bridge’s branches are reduced as "
+                                                      "far as they go; the value is exact")
+                                                 : QString());
+    }
+    const FactoredForm form = factoredForm(analysis, expressions);
+    factoredText_ = QString::fromStdString(form.text()).trimmed();
+    if (factored_ && factored_->text() != factoredText_)
+        factored_->setText(factoredText_);
+}
+
+const std::vector<tauline::TimeConstantExpression>&
+TimeConstantTable::expressionsFor(const tauline::Analysis& analysis, const tauline::Network& network)
+{
+    std::string key = std::to_string(static_cast<int>(network.response.kind));
+    for (const auto& node : network.response.input)
+        key += '|' + node;
+    for (const auto& node : network.response.output)
+        key += '|' + node;
+    for (const auto& part : network.parts)
+        key += ';' + part.name + ',' + std::to_string(static_cast<int>(part.kind)) + ',' + part.nodes[0] + ',' +
+               part.nodes[1];
+    // What the null state depends on beyond the shape.
+    key += analysis.dc.kind == LimitKind::Finite && analysis.dc.value != 0.0 ? "#n" : "#-";
+    for (const auto& tc : analysis.timeConstants)
+        key += ';' + tc.element + (tc.rNull ? "+" : "-");
+    if (key != expressionKey_) {
+        expressions_ = timeConstantExpressions(network, analysis);
+        expressionKey_ = std::move(key);
+    }
+    return expressions_;
+}
+
+QString TimeConstantTable::plainText() const
+{
+    QStringList lines;
+    QStringList header;
+    for (int c = 0; c < columnCount(); ++c)
+        header << headerItem()->text(c);
+    lines << header.join(QLatin1Char('\t'));
+    auto rowText = [this](const QTreeWidgetItem* item) {
+        QStringList cells;
+        for (int c = 0; c < columnCount(); ++c)
+            cells << item->text(c);
+        while (!cells.isEmpty() && cells.back().isEmpty())
+            cells.removeLast();
+        return cells.join(QLatin1Char('\t'));
+    };
+    for (int i = 0; i < topLevelItemCount(); ++i) {
+        const QTreeWidgetItem* row = topLevelItem(i);
+        lines << rowText(row);
+        for (int k = 0; k < row->childCount(); ++k)
+            lines << rowText(row->child(k));
+    }
+    if (!factoredText_.isEmpty())
+        lines << QString() << factoredText_;
+    return lines.join(QLatin1Char('\n')) + QLatin1Char('\n');
+}
+
+void TimeConstantTable::copyAsText() const
+{
+    QApplication::clipboard()->setText(plainText());
 }
 
 void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis)
@@ -41,6 +154,9 @@ void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis)
         return seconds ? secondsText(v) : ohmsText(v);
     };
     const Qt::Alignment right = Qt::AlignRight | Qt::AlignVCenter;
+    factoredText_.clear();
+    if (factored_)
+        factored_->clear();
 
     // Children of each part: its second-order constants, in engine order.
     std::map<std::string, std::vector<const tauline::PairTimeConstant*>> pairs;
@@ -65,7 +181,7 @@ void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis)
             auto* row = new QTreeWidgetItem(this);
             const QString name = QString::fromStdString(tc.element);
             row->setText(PartColumn, name);
-            for (int c = TauColumn; c < ColumnCount; ++c)
+            for (int c = TauColumn; c <= NullResistanceColumn; ++c)
                 row->setTextAlignment(c, right);
             row->setToolTip(TauColumn, tr("%1's time constant with every other reactive part at its "
                                           "zero-value state and the input zeroed")
@@ -89,6 +205,9 @@ void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis)
         row->setText(ResistanceColumn, ohmsText(tc.r));
         row->setText(NullTauColumn, nullText(tc.tauNull, true));
         row->setText(NullResistanceColumn, nullText(tc.rNull, false));
+        // Part names need the network: the two-argument form fills these.
+        row->setText(ExpressionColumn, QString());
+        row->setText(NullExpressionColumn, QString());
         const auto& children = pairs[tc.element];
         for (int k = 0; k < row->childCount(); ++k) {
             QTreeWidgetItem* child = row->child(k);
@@ -103,6 +222,9 @@ void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis)
 void TimeConstantTable::clearConstants()
 {
     clear();
+    factoredText_.clear();
+    if (factored_)
+        factored_->clear();
 }
 
 }  // namespace tauline::ui

@@ -1,6 +1,9 @@
 #include "AnalysisText.h"
 
+#include "FactoredForm.h"
 #include "HazardCaution.h"
+#include "LowQPair.h"
+#include "ResistanceExpressions.h"
 #include "TextTable.h"
 #include "ValueParser.h"
 
@@ -136,6 +139,70 @@ void writePairTimeConstants(std::ostream& out, const Analysis& a)
     table.print(out);
 }
 
+std::string signedPercent(double fraction)
+{
+    std::string percent = fixed(100.0 * fraction, 1);
+    if (percent == "-0.0")
+        percent = "0.0";
+    return (percent[0] == '-' ? "" : "+") + percent + " %";
+}
+
+void writeExpressions(std::ostream& out, const Analysis& a, const std::vector<TimeConstantExpression>& expressions)
+{
+    if (expressions.empty())
+        return;
+    out << "\nTime constants in part names (input zeroed | response nulled):\n";
+    TextTable table({"part", "\u03C4", "", "\u03C4 null", ""});
+    bool anyBridge = false;
+    bool anyWithoutForm = false;
+    for (size_t k = 0; k < expressions.size() && k < a.timeConstants.size(); ++k) {
+        const auto& e = expressions[k];
+        const auto& tc = a.timeConstants[k];
+        const std::string nullState = nullTimeConstantState(a, tc);
+        table.addRow({e.element, e.tauText(), secondsOrInfinite(tc.tau),
+                      nullState == "undefined" ? "undefined" : e.nullTauText(),
+                      nullState == "undefined" ? "" : secondsOrInfinite(tc.tauNull)});
+        anyBridge = anyBridge || (e.seen && !e.seen->seriesParallel()) || (e.nulled && !e.nulled->seriesParallel());
+        anyWithoutForm = anyWithoutForm || (e.nullDefined && !e.nulled && nullState != "undefined");
+    }
+    table.print(out);
+    if (anyBridge)
+        out << "  bridge(\u2026): that resistance is not series\u2013parallel; its branches are reduced as far as\n"
+               "    they go, and the value beside it is exact.\n";
+    if (anyWithoutForm)
+        out << "  no series\u2013parallel form: the null state holds the output at zero through the input,\n"
+               "    which no series or parallel step removes; the value beside it is exact.\n";
+}
+
+void writeFactoredForm(std::ostream& out, const FactoredForm& form)
+{
+    out << "\nFactored form (exact roots):\n  " << form.formula() << '\n';
+    for (const auto& line : form.definitions())
+        out << "    " << line << '\n';
+}
+
+void writeLowQPairs(std::ostream& out, const std::vector<LowQPair>& pairs)
+{
+    if (pairs.empty())
+        return;
+    out << "\nClose corners read as one quadratic (\u03C90 and Q from the time-constant sums;\n"
+           "low-Q approximation, Erickson & Maksimovi\u0107, Fundamentals of Power Electronics, ch. 8):\n";
+    TextTable table({"type", "exact", "f0", "Q", "simple estimate", "low-Q: Q\u00B7f0, f0/Q", "quadratic's roots"});
+    auto both = [](double x, double y) { return signedPercent(x) + ", " + signedPercent(y); };
+    for (const auto& p : pairs) {
+        table.addRow({p.type == RootType::Pole ? "poles" : "zeros",
+                      formatQuantity(p.exactLowHz, "Hz", kDigits) + ", " + formatQuantity(p.exactHighHz, "Hz", kDigits),
+                      formatQuantity(p.omega0Hz(), "Hz", kDigits), fixed(p.q, 3),
+                      both(p.estimateLowError, p.estimateHighError), both(p.lowQLowError, p.lowQHighError),
+                      p.quadraticLowError ? both(*p.quadraticLowError, *p.quadraticHighError)
+                                          : std::string("Q \u2265 0.5: no real split")});
+    }
+    table.print(out);
+    out << "  Errors are against the exact corners. Q\u00B7f0 and f0/Q are the simple estimates again\n"
+           "  (a\u2096\u208B\u2081/a\u2096 and a\u2096/a\u2096\u208A\u2081); the factor F = (1 + \u221A(1 \u2212 4Q\u00B2))/2 "
+           "moves them to the\n  quadratic's roots f0\u00B7Q/F and f0\u00B7F/Q.\n";
+}
+
 void writeBreakpoints(std::ostream& out, const Analysis& a)
 {
     out << "\nBreakpoints (exact, and estimated from the time-constant sums):\n";
@@ -146,10 +213,7 @@ void writeBreakpoints(std::ostream& out, const Analysis& a)
     TextTable table({"type", "exact", "estimate", "error", "q", ""});
     bool anyPoor = false;
     for (const auto& bp : a.breakpoints) {
-        std::string percent = fixed(100.0 * bp.estimateError, 1);
-        if (percent == "-0.0")
-            percent = "0.0";
-        std::string error = (percent[0] == '-' ? "" : "+") + percent + " %";
+        const std::string error = signedPercent(bp.estimateError);
         table.addRow({bp.type == RootType::Pole ? "pole" : "zero", formatQuantity(bp.hz, "Hz", kDigits),
                       formatQuantity(bp.estimateHz, "Hz", kDigits), error, bp.q ? fixed(*bp.q, 3) : "",
                       bp.poorlySeparated ? "*" : ""});
@@ -181,8 +245,12 @@ void writeAnalysisText(std::ostream& out, const AnalysedFile& file)
     out << "Numerator (ascending powers of s):   " << coefficients(a.numerator) << '\n';
     out << "Denominator (ascending powers of s): " << coefficients(a.denominator) << '\n';
     writeTimeConstants(out, a);
+    const auto expressions = timeConstantExpressions(network, a);
+    writeExpressions(out, a, expressions);
     writePairTimeConstants(out, a);
+    writeFactoredForm(out, factoredForm(a, expressions));
     writeBreakpoints(out, a);
+    writeLowQPairs(out, lowQPairs(a));
 
     auto warnings = file.warnings();
     if (!warnings.empty()) {

@@ -6,6 +6,7 @@
 #include "ArgumentList.h"
 #include "Errors.h"
 #include "HazardCaution.h"
+#include "PlaceCommand.h"
 #include "SweepOutput.h"
 #include "ValueParser.h"
 
@@ -26,6 +27,7 @@ constexpr long kMaxSweepPoints = 100000;
 constexpr const char* kUsage =
     "usage: tauline analyze FILE [--json]\n"
     "       tauline sweep FILE (--at HZ[,HZ...] | --from HZ --to HZ --points N) [--json | --csv]\n"
+    "       tauline place FILE --corner N --to HZ [--vary PART] [--series E24] [--json]\n"
     "       tauline plot FILE --svg OUT.svg [--from HZ --to HZ]   (with the editor)\n";
 
 constexpr const char* kAnalyzeHelp =
@@ -200,7 +202,7 @@ int runSweep(const std::vector<std::string>& arguments, std::ostream& out, std::
 
 bool isCommandLineCommand(std::string_view word)
 {
-    return word == "analyze" || word == "sweep";
+    return word == "analyze" || word == "sweep" || word == "place";
 }
 
 void printCommandLineHelp(std::ostream& out)
@@ -209,6 +211,7 @@ void printCommandLineHelp(std::ostream& out)
         << kUsage << '\n'
         << kAnalyzeHelp << '\n'
         << kSweepHelp << '\n'
+        << cli::kPlaceHelp << '\n'
         << kFrequencyHelp << '\n'
         << kExitHelp;
 }
@@ -229,6 +232,8 @@ int runCommandLine(int argc, char** argv, std::ostream& out, std::ostream& err)
             return runAnalyze(rest, out, err);
         if (command == "sweep")
             return runSweep(rest, out, err);
+        if (command == "place")
+            return cli::runPlace(rest, out, err);
         throw UsageError("unknown command \"" + command + "\"");
     } catch (const UsageError& e) {
         err << "tauline: " << e.what() << '\n' << kUsage << "Run 'tauline --help' for details.\n";
