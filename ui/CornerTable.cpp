@@ -78,37 +78,48 @@ void CornerTable::setAnalysis(const tauline::Analysis& analysis)
 {
     const int keep = selectedCorner();
     QSignalBlocker block(this);
-    clearContents();
     const auto& corners = analysis.breakpoints;
+    // Rows are kept and their cells rewritten in place: a value dragged
+    // through a series re-fills the same rows many times a second, and new
+    // items each time cost the view a full relayout.
     setRowCount(static_cast<int>(corners.size()));
     parts_.assign(corners.size(), {});
     const Qt::Alignment right = Qt::AlignRight | Qt::AlignVCenter;
+    auto put = [this](int row, int column, const QString& text, Qt::Alignment align) {
+        QTableWidgetItem* it = item(row, column);
+        if (!it) {
+            it = cell(text, align);
+            setItem(row, column, it);
+        } else {
+            it->setText(text);
+            it->setTextAlignment(align);
+        }
+        return it;
+    };
+    const Qt::Alignment left = Qt::AlignLeft | Qt::AlignVCenter;
     for (int row = 0; row < rowCount(); ++row) {
         const auto& corner = corners[row];
-        auto* frequency = cell(frequencyText(corner.hz), right);
+        auto* frequency = put(row, FrequencyColumn, frequencyText(corner.hz), right);
         frequency->setData(HzRole, corner.hz);
-        setItem(row, FrequencyColumn, frequency);
-        auto* type = cell(typeText(corner));
+        auto* type = put(row, TypeColumn, typeText(corner), left);
         type->setForeground(corner.type == tauline::RootType::Pole ? QColor(0x8a, 0x2c, 0x22)
                                                                    : QColor(0x1f, 0x6a, 0x40));
-        setItem(row, TypeColumn, type);
-        auto* estimate = cell(frequencyText(corner.estimateHz), right);
+        auto* estimate = put(row, EstimateColumn, frequencyText(corner.estimateHz), right);
         estimate->setData(HzRole, corner.estimateHz);
-        setItem(row, EstimateColumn, estimate);
-        setItem(row, ErrorColumn, cell(percentText(corner.estimateError), right));
-        auto* separation = cell(corner.poorlySeparated ? tr("⚠ too close") : tr("ok"));
+        put(row, ErrorColumn, percentText(corner.estimateError), right);
+        auto* separation = put(row, SeparationColumn, corner.poorlySeparated ? tr("⚠ too close") : tr("ok"), left);
         if (corner.poorlySeparated) {
             separation->setForeground(QColor(0x9a, 0x5b, 0x00));
             separation->setToolTip(tr("The corners lie too close together for the time-constant "
                                       "estimate; read the exact frequency."));
         } else {
             separation->setForeground(QColor(0x70, 0x76, 0x80));
+            separation->setToolTip(QString());
         }
-        setItem(row, SeparationColumn, separation);
-        auto* parts = cell(QStringLiteral("…"));
+        auto* parts = put(row, PartsColumn, QStringLiteral("…"), left);
+        parts->setData(PartsRole, QVariant());
         parts->setForeground(QColor(0x70, 0x76, 0x80));
         parts->setToolTip(tr("Working out which parts set this corner…"));
-        setItem(row, PartsColumn, parts);
     }
     // Close pairs read as one quadratic (LowQPair.h): where that lands.
     for (const auto& pair : tauline::lowQPairs(analysis)) {

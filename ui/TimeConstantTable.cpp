@@ -63,7 +63,9 @@ TimeConstantTable::~TimeConstantTable()
 
 void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis, const tauline::Network& network)
 {
-    setAnalysis(analysis);
+    // Cells are set only to their new text, never blanked first: an
+    // unchanged cell then costs the view nothing while a value is dragged.
+    updateRows(analysis);
     const auto& expressions = expressionsFor(analysis, network);
     const bool nullUndefined = analysis.kind != ResponseKind::Impedance && analysis.dc.kind != LimitKind::Finite;
     for (int i = 0; i < topLevelItemCount() && i < static_cast<int>(expressions.size()); ++i) {
@@ -143,6 +145,19 @@ void TimeConstantTable::copyAsText() const
 
 void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis)
 {
+    updateRows(analysis);
+    // Part names need the network: the two-argument form fills these.
+    for (int i = 0; i < topLevelItemCount(); ++i) {
+        topLevelItem(i)->setText(ExpressionColumn, QString());
+        topLevelItem(i)->setText(NullExpressionColumn, QString());
+    }
+    factoredText_.clear();
+    if (factored_)
+        factored_->clear();
+}
+
+void TimeConstantTable::updateRows(const tauline::Analysis& analysis)
+{
     // The null double injection does not exist for a transfer response whose
     // dc value is zero or infinite: there an empty null value is undefined,
     // elsewhere it is infinite.
@@ -154,9 +169,6 @@ void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis)
         return seconds ? secondsText(v) : ohmsText(v);
     };
     const Qt::Alignment right = Qt::AlignRight | Qt::AlignVCenter;
-    factoredText_.clear();
-    if (factored_)
-        factored_->clear();
 
     // Children of each part: its second-order constants, in engine order.
     std::map<std::string, std::vector<const tauline::PairTimeConstant*>> pairs;
@@ -205,9 +217,6 @@ void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis)
         row->setText(ResistanceColumn, ohmsText(tc.r));
         row->setText(NullTauColumn, nullText(tc.tauNull, true));
         row->setText(NullResistanceColumn, nullText(tc.rNull, false));
-        // Part names need the network: the two-argument form fills these.
-        row->setText(ExpressionColumn, QString());
-        row->setText(NullExpressionColumn, QString());
         const auto& children = pairs[tc.element];
         for (int k = 0; k < row->childCount(); ++k) {
             QTreeWidgetItem* child = row->child(k);

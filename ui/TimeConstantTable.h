@@ -40,6 +40,9 @@ public:
     void copyAsText() const;
 
 private:
+    // The numbers of every row (rows kept while the parts stay the same);
+    // the expression columns and the factored form are left as they are.
+    void updateRows(const tauline::Analysis& analysis);
     // The expressions depend on the drawing's shape, not on part values:
     // while a value is dragged they are reused.
     const std::vector<tauline::TimeConstantExpression>& expressionsFor(const tauline::Analysis& analysis,
