@@ -132,9 +132,15 @@ void CornerTable::setAnalysis(const tauline::Analysis& analysis)
             tip += tr("\nThe quadratic's roots f0·Q/F, f0·F/Q: %1 and %2 (%3, %4 off).")
                        .arg(frequencyText(*pair.quadraticLowHz), frequencyText(*pair.quadraticHighHz),
                             percentText(*pair.quadraticLowError), percentText(*pair.quadraticHighError));
+        // The pair's quadratic in the cell itself, not only in the tooltip:
+        // it is what to read where the simple estimate fails.
+        const QString text = tr("pair: f0 %1, Q %2").arg(frequencyText(pair.omega0Hz())).arg(pair.q, 0, 'f', 2);
         for (int row : {pair.lowBreakpoint, pair.highBreakpoint})
-            if (QTableWidgetItem* separation = item(row, SeparationColumn))
+            if (QTableWidgetItem* separation = item(row, SeparationColumn)) {
+                const bool flagged = corners[row].poorlySeparated;
+                separation->setText(flagged ? QStringLiteral("⚠ ") + text : text);
                 separation->setToolTip(tip);
+            }
     }
     if (keep >= 0 && keep < rowCount())
         selectRow(keep);

@@ -134,3 +134,29 @@ TEST_CASE("Infinite time constants show as ∞ and undefined null ones as —", 
         CHECK(table.topLevelItem(0)->text(TimeConstantTable::NullTauColumn) == kUndefinedText);
     }
 }
+
+TEST_CASE("Close corners show their pair's f0 and Q in the corner table", "[plot][table][lowq]")
+{
+    // Two equal RC sections in cascade: 1 + 3x + x² with x = sRC, so the pair
+    // has f0 = 1/(2πRC) and Q = 1/3 (exact roots of the quadratic; the
+    // low-Q reading of Erickson & Maksimović, Fundamentals of Power
+    // Electronics, 3rd ed., ch. 8).
+    const tauline::Network network = networkOf(R"({
+      "format": "tauline-network", "version": 1,
+      "parts": [
+        {"name": "R1", "kind": "resistor", "value": "10k", "nodes": ["in", "a"]},
+        {"name": "C1", "kind": "capacitor", "value": "10n", "nodes": ["a", "gnd"]},
+        {"name": "R2", "kind": "resistor", "value": "10k", "nodes": ["a", "out"]},
+        {"name": "C2", "kind": "capacitor", "value": "10n", "nodes": ["out", "gnd"]}
+      ],
+      "response": {"kind": "voltage-gain", "input": ["in", "gnd"], "output": ["out", "gnd"]}
+    })");
+    const tauline::Analysis a = tauline::analyze(network);
+    REQUIRE(a.breakpoints.size() == 2);
+    CornerTable table;
+    table.setAnalysis(a);
+    const double f0 = 1.0 / (2.0 * 3.14159265358979323846 * 10e3 * 10e-9);
+    const QString expected = QStringLiteral("pair: f0 %1, Q 0.33").arg(frequencyText(f0));
+    for (int row = 0; row < 2; ++row)
+        CHECK(table.item(row, CornerTable::SeparationColumn)->text().contains(expected));
+}
