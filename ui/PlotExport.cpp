@@ -1,6 +1,7 @@
 #include "PlotExport.h"
 
 #include "BodeChart.h"
+#include "ReferenceCurve.h"
 
 #include <QBuffer>
 #include <QGraphicsScene>
@@ -23,6 +24,10 @@ void withChart(const PlotSnapshot& snapshot, QSize size, Draw draw)
     chart->setTitle(snapshot.title);
     chart->setPhaseVisible(snapshot.phaseVisible);
     chart->setUserRange(snapshot.userRangeHz);
+    if (snapshot.reference) {
+        chart->setAnalysis(*snapshot.reference);
+        chart->keepReference();
+    }
     chart->setAnalysis(snapshot.analysis);
     chart->setHighlightedCorner(snapshot.highlightedCorner);
     const QRectF rect(QPointF(0, 0), QSizeF(size));
@@ -42,6 +47,8 @@ PlotSnapshot snapshotOf(const BodeChart& chart, const QString& title)
     s.userRangeHz = chart.userRange();
     s.phaseVisible = chart.isPhaseVisible();
     s.highlightedCorner = chart.highlightedCorner();
+    if (chart.hasReference())
+        s.reference = chart.reference()->analysis();
     s.title = title;
     return s;
 }

@@ -23,6 +23,8 @@ struct PlotSnapshot {
     bool phaseVisible = false;
     int highlightedCorner = -1;
     QString title;
+    // The curve kept to compare with, drawn faintly as on screen.
+    std::optional<tauline::Analysis> reference;
 };
 
 PlotSnapshot snapshotOf(const BodeChart& chart, const QString& title);

@@ -5,6 +5,7 @@
 #include "Analysis.h"
 #include "ReferenceCurve.h"
 #include "ReferenceCurveActions.h"
+#include "PlotExport.h"
 
 #include <QAction>
 #include <QGraphicsScene>
@@ -103,4 +104,24 @@ TEST_CASE("A kept reference curve survives edits, ranges and messages until dism
     CHECK(referencePoints(*chart).isEmpty());
     for (QLineSeries* s : chart->reference()->series())
         CHECK(s->points().isEmpty());
+}
+
+TEST_CASE("An exported plot carries the kept reference curve", "[plot][reference][export]")
+{
+    QGraphicsScene scene;
+    auto* chart = new BodeChart;
+    scene.addItem(chart);
+    chart->setGeometry(QRectF(0, 0, 800, 500));
+    chart->setAnalysis(tauline::analyze(rcPort(10e3, 2.2e-9)));
+    const QByteArray colour = ReferenceCurve::color().name().toLatin1();  // "#8c949e"
+
+    const QByteArray without = plotSvg(snapshotOf(*chart, QStringLiteral("RC")));
+    CHECK(!without.contains(colour));
+
+    chart->keepReference();
+    chart->setAnalysis(tauline::analyze(rcPort(47e3, 2.2e-9)));
+    const PlotSnapshot snapshot = snapshotOf(*chart, QStringLiteral("RC"));
+    REQUIRE(snapshot.reference.has_value());
+    CHECK(snapshot.reference->breakpoints.front().hz == Approx(1.0 / (2.0 * std::numbers::pi * 10e3 * 2.2e-9)));
+    CHECK(plotSvg(snapshot).contains(colour));
 }
