@@ -28,7 +28,8 @@ struct AnalysisOutcome {
 // canvas stays responsive. Every request bumps a generation counter and a
 // result is delivered only if it belongs to the latest request: a result
 // that arrives after a newer edit is dropped, never shown as current.
-// Corner sensitivities (two re-analyses per part) follow on the worker as a
+// Corner sensitivities (exact, one factorisation per corner; differences only
+// at a double root) follow on the worker as a
 // second signal for the same generation, once the edits pause, so they never
 // compete with redrawing while a value is dragged.
 class AnalysisRunner : public QObject {
