@@ -17,9 +17,6 @@ namespace {
 
 constexpr int kOk = 0;
 constexpr int kFailed = 1;
-constexpr int kBadUsage = 2;
-
-const char* const kUsage = "usage: tauline plot FILE --svg OUT.svg [--from HZ --to HZ]\n";
 
 const char* const kHelp =
     "tauline plot FILE --svg OUT.svg [--from HZ --to HZ]\n"
@@ -30,12 +27,6 @@ const char* const kHelp =
     "  --from HZ --to HZ the frequency range; by default every corner with a\n"
     "                    decade to spare\n";
 
-int badUsage(const QString& message)
-{
-    std::cerr << "tauline plot: " << message.toStdString() << '\n' << kUsage;
-    return kBadUsage;
-}
-
 }  // namespace
 
 const char* plotCommandHelp()
@@ -45,14 +36,9 @@ const char* plotCommandHelp()
 
 int plotCommand(const QStringList& arguments)
 {
-    for (const QString& argument : arguments.mid(1))
-        if (argument == QStringLiteral("--help") || argument == QStringLiteral("-h")) {
-            std::cout << kHelp;
-            return kOk;
-        }
-    const auto parsed = parseSvgCommandArguments(arguments);
-    if (const QString* message = std::get_if<QString>(&parsed))
-        return badUsage(*message);
+    const auto parsed = svgCommandArguments(arguments, "plot", kHelp);
+    if (const int* status = std::get_if<int>(&parsed))
+        return *status;
     const auto& [file, out, range] = std::get<SvgCommandArguments>(parsed);
     PlotSnapshot snapshot;
     snapshot.userRangeHz = range;

@@ -18,9 +18,6 @@ namespace {
 
 constexpr int kOk = 0;
 constexpr int kFailed = 1;
-constexpr int kBadUsage = 2;
-
-const char* const kUsage = "usage: tauline report FILE --svg OUT.svg [--from HZ --to HZ]\n";
 
 const char* const kHelp =
     "tauline report FILE --svg OUT.svg [--from HZ --to HZ]\n"
@@ -32,12 +29,6 @@ const char* const kHelp =
     "  --from HZ --to HZ the plot's frequency range; by default every corner\n"
     "                    with a decade to spare\n";
 
-int badUsage(const QString& message)
-{
-    std::cerr << "tauline report: " << message.toStdString() << '\n' << kUsage;
-    return kBadUsage;
-}
-
 }  // namespace
 
 const char* reportCommandHelp()
@@ -47,14 +38,9 @@ const char* reportCommandHelp()
 
 int reportCommand(const QStringList& arguments)
 {
-    for (const QString& argument : arguments.mid(1))
-        if (argument == QStringLiteral("--help") || argument == QStringLiteral("-h")) {
-            std::cout << kHelp;
-            return kOk;
-        }
-    const auto parsed = parseSvgCommandArguments(arguments);
-    if (const QString* message = std::get_if<QString>(&parsed))
-        return badUsage(*message);
+    const auto parsed = svgCommandArguments(arguments, "report", kHelp);
+    if (const int* status = std::get_if<int>(&parsed))
+        return *status;
     const auto& [file, out, range] = std::get<SvgCommandArguments>(parsed);
     ReviewContent content;
     try {

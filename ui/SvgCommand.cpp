@@ -10,6 +10,9 @@
 
 namespace tauline::ui {
 
+namespace {
+
+// The arguments, or what is wrong with them.
 std::variant<SvgCommandArguments, QString> parseSvgCommandArguments(const QStringList& arguments)
 {
     QCommandLineParser parser;
@@ -52,6 +55,26 @@ std::variant<SvgCommandArguments, QString> parseSvgCommandArguments(const QStrin
         out.rangeHz = std::make_pair(*from, *to);
     }
     return out;
+}
+
+}  // namespace
+
+std::variant<SvgCommandArguments, int> svgCommandArguments(const QStringList& arguments, const char* name,
+                                                           const char* help)
+{
+    for (const QString& argument : arguments.mid(1))
+        if (argument == QStringLiteral("--help") || argument == QStringLiteral("-h")) {
+            std::cout << help;
+            return 0;
+        }
+    auto parsed = parseSvgCommandArguments(arguments);
+    if (const QString* message = std::get_if<QString>(&parsed)) {
+        const std::string text = help;
+        std::cerr << "tauline " << name << ": " << message->toStdString() << '\n'
+                  << "usage: " << text.substr(0, text.find('\n') + 1);
+        return 2;
+    }
+    return std::get<SvgCommandArguments>(std::move(parsed));
 }
 
 void printFileProblems(const QString& file, const tauline::InputError& error)

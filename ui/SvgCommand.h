@@ -22,9 +22,12 @@ struct SvgCommandArguments {
     std::optional<std::pair<double, double>> rangeHz;  // --from, --to
 };
 
-// Parses "PROGRAM FILE --svg OUT.svg [--from HZ --to HZ]" (the subcommand's
-// name already removed); on bad usage, the message saying what is wrong.
-std::variant<SvgCommandArguments, QString> parseSvgCommandArguments(const QStringList& arguments);
+// Reads "PROGRAM FILE --svg OUT.svg [--from HZ --to HZ]" (the subcommand,
+// `name`, already removed). Either the arguments, or the exit status already
+// settled and printed: 0 after --help (which prints `help`), 2 after bad
+// usage (the problem, then `help`'s first line as the usage).
+std::variant<SvgCommandArguments, int> svgCommandArguments(const QStringList& arguments, const char* name,
+                                                           const char* help);
 
 // One line per problem on stderr, each naming the file (the reader's
 // messages already do; the engine's name a part).
