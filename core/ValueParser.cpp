@@ -326,6 +326,17 @@ Engineering engineering(double value, int digits)
     if (value == 0.0)
         return {"0", ""};
     auto [mantissaDigits, exponent10] = roundedDigits(std::fabs(value), digits);
+    if (exponent10 < -15 || exponent10 >= 15) {
+        // Past the prefixes a row of zeros hides the size: "1.37e-55", not
+        // "0.000…0137 f".
+        std::string rest = mantissaDigits.substr(1);
+        while (!rest.empty() && rest.back() == '0')
+            rest.pop_back();
+        char buffer[48];
+        std::snprintf(buffer, sizeof buffer, "%s%c%s%se%d", value < 0 ? "-" : "", mantissaDigits[0],
+                      rest.empty() ? "" : ".", rest.c_str(), exponent10);
+        return {buffer, ""};
+    }
     int exponent3 = exponent10 >= 0 ? (exponent10 / 3) * 3 : -((-exponent10 + 2) / 3) * 3;
     exponent3 = std::clamp(exponent3, -15, 12);
     int intDigits = exponent10 - exponent3 + 1;

@@ -230,6 +230,11 @@ TEST_CASE("formatEngineering and formatQuantity", "[value]")
     CHECK(formatQuantity(7234.3276, "Hz") == "7.234 kHz");
     CHECK(formatQuantity(500.0, "Hz") == "500 Hz");
     CHECK(formatQuantity(22e-6, "s") == "22 \u00B5s");
+    // Past the SI prefixes: powers of ten, not a row of zeros.
+    CHECK(formatQuantity(1.369e-55, "s") == "1.369e-55 s");
+    CHECK(formatEngineering(-2e-16) == "-2e-16");
+    CHECK(formatEngineering(3.3e-15) == "3.3 f");
+    CHECK(formatEngineering(4.7e18) == "4.7e18");
 }
 
 TEST_CASE("frequencies use the same prefixes, with an optional Hz", "[value]")
