@@ -5,6 +5,7 @@
 
 #include <charconv>
 #include <cmath>
+#include <cstdio>
 
 namespace tauline::cli {
 
@@ -68,6 +69,20 @@ std::string exactNumber(double value)
     char buffer[64];
     auto [end, ec] = std::to_chars(buffer, buffer + sizeof buffer, value);
     return std::string(buffer, end);
+}
+
+std::string fixedPoint(double value, int decimals)
+{
+    if (!std::isfinite(value))
+        return exactNumber(value);
+    char buffer[64];
+    std::snprintf(buffer, sizeof buffer, "%.*f", decimals, value);
+    // A tiny negative value prints as "-0.00": keep the sign only where a
+    // digit shows it.
+    const bool onlyZeros = std::string(buffer).find_first_not_of("-0.") == std::string::npos;
+    if (onlyZeros && buffer[0] == '-')
+        return std::string(buffer + 1);
+    return buffer;
 }
 
 }  // namespace tauline::cli

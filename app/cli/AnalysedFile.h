@@ -35,4 +35,8 @@ const char* unitSymbol(ResponseKind kind);
 // not "0.10000000000000001"); "inf", "-inf", "nan" for the rest.
 std::string exactNumber(double value);
 
+// `decimals` places after the point ("-15.12"); a value that rounds to zero
+// has no sign ("0.00", not "-0.00"); non-finite ones as exactNumber.
+std::string fixedPoint(double value, int decimals);
+
 }  // namespace tauline::cli

@@ -17,13 +17,6 @@ namespace {
 
 constexpr int kDigits = 4;
 
-std::string fixed(double value, int decimals)
-{
-    char buffer[64];
-    std::snprintf(buffer, sizeof buffer, "%.*f", decimals, value);
-    return buffer;
-}
-
 std::string general(double value)
 {
     char buffer[64];
@@ -54,7 +47,7 @@ std::string describeLimit(const ResponseLimit& limit, ResponseKind kind, const c
     case LimitKind::Finite: {
         std::string text = formatQuantity(limit.value, unitSymbol(kind), kDigits);
         if (limit.value != 0.0)
-            text += "  (" + fixed(20.0 * std::log10(std::fabs(limit.value)), 2) +
+            text += "  (" + fixedPoint(20.0 * std::log10(std::fabs(limit.value)), 2) +
                     (kind == ResponseKind::VoltageGain ? " dB)" : " dB\u03A9)");
         return text;
     }
@@ -141,7 +134,7 @@ void writePairTimeConstants(std::ostream& out, const Analysis& a)
 
 std::string signedPercent(double fraction)
 {
-    std::string percent = fixed(100.0 * fraction, 1);
+    std::string percent = fixedPoint(100.0 * fraction, 1);
     if (percent == "-0.0")
         percent = "0.0";
     return (percent[0] == '-' ? "" : "+") + percent + " %";
@@ -192,7 +185,7 @@ void writeLowQPairs(std::ostream& out, const std::vector<LowQPair>& pairs)
     for (const auto& p : pairs) {
         table.addRow({p.type == RootType::Pole ? "poles" : "zeros",
                       formatQuantity(p.exactLowHz, "Hz", kDigits) + ", " + formatQuantity(p.exactHighHz, "Hz", kDigits),
-                      formatQuantity(p.omega0Hz(), "Hz", kDigits), fixed(p.q, 3),
+                      formatQuantity(p.omega0Hz(), "Hz", kDigits), fixedPoint(p.q, 3),
                       both(p.estimateLowError, p.estimateHighError), both(p.lowQLowError, p.lowQHighError),
                       p.quadraticLowError ? both(*p.quadraticLowError, *p.quadraticHighError)
                                           : std::string("Q \u2265 0.5: no real split")});
@@ -215,7 +208,7 @@ void writeBreakpoints(std::ostream& out, const Analysis& a)
     for (const auto& bp : a.breakpoints) {
         const std::string error = signedPercent(bp.estimateError);
         table.addRow({bp.type == RootType::Pole ? "pole" : "zero", formatQuantity(bp.hz, "Hz", kDigits),
-                      formatQuantity(bp.estimateHz, "Hz", kDigits), error, bp.q ? fixed(*bp.q, 3) : "",
+                      formatQuantity(bp.estimateHz, "Hz", kDigits), error, bp.q ? fixedPoint(*bp.q, 3) : "",
                       bp.poorlySeparated ? "*" : ""});
         anyPoor = anyPoor || bp.poorlySeparated;
     }

@@ -44,13 +44,6 @@ std::string signedPercent(double relative)
     return buffer;
 }
 
-std::string fixedText(double value, int decimals)
-{
-    char buffer[32];
-    std::snprintf(buffer, sizeof buffer, "%.*f", decimals, value);
-    return buffer;
-}
-
 int cornerOption(const std::string& text)
 {
     if (text.empty() || text.find_first_not_of("0123456789") != std::string::npos || text.size() > 6)
@@ -71,7 +64,7 @@ void writeTable(std::ostream& out, const CornerPlacement& p)
     out << "Corner " << p.corner + 1 << " (" << typeWord(p.type) << ", now "
         << formatQuantity(p.startHz, "Hz", 4) << ") to " << formatQuantity(p.targetHz, "Hz", 4) << " by changing "
         << p.part << " (now " << formatValue(p.startValue, p.kind)
-        << ", d ln f / d ln " << p.part << " = " << fixedText(p.sensitivity, 3) << ")\n\n";
+        << ", d ln f / d ln " << p.part << " = " << fixedPoint(p.sensitivity, 3) << ")\n\n";
     TextTable table({"", p.part, "corner", "off target"});
     table.addRow({"exact", formatQuantity(p.value, valueUnit(p.kind), 6), formatQuantity(p.hz, "Hz", 6),
                   signedPercent(p.hz / p.targetHz - 1.0)});

@@ -13,15 +13,6 @@ namespace tauline::cli {
 
 namespace {
 
-std::string fixed(double value, int decimals)
-{
-    if (!std::isfinite(value))
-        return exactNumber(value);
-    char buffer[64];
-    std::snprintf(buffer, sizeof buffer, "%.*f", decimals, value);
-    return buffer;
-}
-
 void writeJson(std::ostream& out, const std::vector<SweepPoint>& points)
 {
     nlohmann::ordered_json array = nlohmann::ordered_json::array();
@@ -48,7 +39,7 @@ void writeTable(std::ostream& out, const AnalysedFile& file, const std::vector<S
     TextTable table({"frequency", "magnitude", impedance ? "dB\u03A9" : "dB", "phase \u00B0"});
     for (const auto& p : points)
         table.addRow({formatQuantity(p.hz, "Hz", 4), formatQuantity(std::abs(p.value), unitSymbol(a.kind), 4),
-                      fixed(p.db, 2), fixed(p.deg, 2)});
+                      fixedPoint(p.db, 2), fixedPoint(p.deg, 2)});
     table.print(out);
     for (const auto& w : file.warnings())
         out << "Warning: " << w << '\n';
