@@ -38,22 +38,27 @@ def load(path):
     return net
 
 
-def main():
+def check_folder(folder):
+    """Every .tauline file in `folder` against its exact reference."""
     binary, save = tr.binary_from_argv()
     tally = tr.Tally(save)
     mpmath.mp.dps = 40
-    names = sorted(n for n in os.listdir(WIDE) if n.endswith(".tauline"))
+    names = sorted(n for n in os.listdir(folder) if n.endswith(".tauline"))
     for name in names:
-        net = load(os.path.join(WIDE, name))
+        net = load(os.path.join(folder, name))
         # reference: exact rational MNA in SymPy (Meurer et al. 2017)
         ref = ref_mna.analyse(net)
         case = tr.Case(net["label"], net)
-        got, problem = tr.run_json(binary, ["analyze", os.path.join(WIDE, name), "--json"])
+        got, problem = tr.run_json(binary, ["analyze", os.path.join(folder, name), "--json"])
         notes = []
         if case.check(got is not None, str(problem)):
             tst.compare(case, got, ref, net, notes)
         tally.record(case)
     tally.finish(minimum_passed=len(names))
+
+
+def main():
+    check_folder(WIDE)
 
 
 if __name__ == "__main__":
