@@ -62,12 +62,7 @@ public:
 
     std::optional<Sample> start(const Analysis& a, int corner, double u)
     {
-        Sample s;
-        s.u = u;
-        s.index = corner;
-        s.corner = a.breakpoints[corner];
-        s.lnf = std::log(s.corner.hz);
-        s.all = a.breakpoints;
+        Sample s = sampleOf(a, corner, u);
         const auto slope = exactCornerSensitivity(network_, s.corner, part_);
         s.slope = slope ? *slope : 0.0;
         return s;
@@ -101,6 +96,17 @@ public:
     }
 
 private:
+    static Sample sampleOf(const Analysis& a, int corner, double u)
+    {
+        Sample s;
+        s.u = u;
+        s.index = corner;
+        s.corner = a.breakpoints[corner];
+        s.lnf = std::log(s.corner.hz);
+        s.all = a.breakpoints;
+        return s;
+    }
+
     Step oneStep(const Sample& from, double u)
     {
         Step step;
@@ -148,12 +154,7 @@ private:
                 }
             return step;
         }
-        Sample s;
-        s.u = u;
-        s.index = best;
-        s.corner = a.breakpoints[best];
-        s.lnf = std::log(s.corner.hz);
-        s.all = a.breakpoints;
+        Sample s = sampleOf(a, best, u);
         const auto slope = exactCornerSensitivity(changed, s.corner, part_);
         // On a double root the derivative does not exist: the local chord
         // stands in, so Newton still has a direction.
