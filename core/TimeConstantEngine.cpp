@@ -1,11 +1,14 @@
 #include "TimeConstantEngine.h"
 
+#include "DoubleDouble.h"
 #include "EquilibratedLu.h"
+#include "PrincipalMinorSums.h"
 #include "RootPolynomial.h"
 
 #include <Eigen/Eigenvalues>
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <map>
 
 namespace tauline {
@@ -40,6 +43,108 @@ std::vector<Eigen::VectorXd> floatingVectors(const std::vector<int>& labels, int
     return out;
 }
 
+// Port voltages Pᵀ·x refined until they carry the digits of the result,
+// not those of the node voltages. Where the nulling nearly shorts a port,
+// its voltage is a difference of node voltages up to 1e11 times larger
+// (wide-61594: 3.3e-5 Ω from voltages of MV per A), and a residual formed
+// from the summed matrix, even in long double, leaves 1e-19 of those
+// voltages — 3e-8 of the result. Here the residual is KCL itself: each
+// resistor's current g·(x_a − x_b) from the node voltages in double-double,
+// so the rows' sums hold exactly, and the double factors correct x until
+// the correction stops shrinking (iterative refinement with a residual in
+// doubled precision: Wilkinson, Rounding Errors in Algebraic Processes,
+// 1963, ch. 3; Higham, Accuracy and Stability of Numerical Algorithms, 2nd
+// ed., 2002, ch. 12).
+Eigen::Matrix<long double, Eigen::Dynamic, Eigen::Dynamic> portVoltages(const NodalModel& model, const Eigen::MatrixXd& m,
+                                                                       const std::vector<int>& labels,
+                                                                       const EquilibratedLu<double>& lu,
+                                                                       const Eigen::MatrixXd& p, const Eigen::MatrixXd& x)
+{
+    using DD = DoubleDouble;
+    const int size = static_cast<int>(m.rows());
+    const int unknowns = model.unknowns();  // node voltages, and the source current
+    const int ports = static_cast<int>(p.cols());
+    // Everything but the resistors, entry by entry: the source's incidence,
+    // the bordering input and output, the floating pieces' w·wᵀ.
+    Eigen::MatrixXd rest = m;
+    rest.topLeftCorner(unknowns, unknowns).setZero();
+    if (model.sourceRow >= 0) {
+        rest.row(model.sourceRow).head(unknowns) = model.G.row(model.sourceRow);
+        rest.col(model.sourceRow).head(unknowns) = model.G.col(model.sourceRow);
+    }
+    for (const auto& w : floatingVectors(labels, size))
+        rest += w * w.transpose();
+    struct Entry {
+        int row, col;
+        double value;
+    };
+    std::vector<Entry> entries;
+    for (int i = 0; i < size; ++i)
+        for (int j = 0; j < size; ++j)
+            if (rest(i, j) != 0.0)
+                entries.push_back({i, j, rest(i, j)});
+    std::vector<DD> conductance;
+    for (const auto& e : model.resistorEdges)
+        conductance.push_back(DD(1.0) / DD(e.resistance));
+
+    std::vector<std::vector<DD>> xs(ports, std::vector<DD>(size));
+    for (int j = 0; j < ports; ++j)
+        for (int i = 0; i < size; ++i)
+            xs[j][i] = x(i, j);
+    auto voltage = [](const std::vector<DD>& v, int node) { return node < 0 ? DD(0.0) : v[node]; };
+    std::vector<double> previous(ports, std::numeric_limits<double>::infinity());
+    std::vector<bool> converging(ports, true);
+    for (int step = 0; step < 4; ++step) {
+        Eigen::MatrixXd residual(size, ports);
+        for (int j = 0; j < ports; ++j) {
+            std::vector<DD> r(size);
+            for (int i = 0; i < size; ++i)
+                r[i] = p(i, j);
+            for (const Entry& e : entries)
+                r[e.row] -= DD(e.value) * xs[j][e.col];
+            for (size_t k = 0; k < conductance.size(); ++k) {
+                const auto& edge = model.resistorEdges[k];
+                const DD current = conductance[k] * (voltage(xs[j], edge.a) - voltage(xs[j], edge.b));
+                if (edge.a >= 0)
+                    r[edge.a] -= current;
+                if (edge.b >= 0)
+                    r[edge.b] += current;
+            }
+            for (int i = 0; i < size; ++i)
+                residual(i, j) = r[i].value();
+        }
+        const Eigen::MatrixXd correction = lu.solve(residual, 0);
+        bool any = false;
+        for (int j = 0; j < ports; ++j) {
+            const double norm = correction.col(j).norm();
+            if (!converging[j] || !(norm <= 0.5 * previous[j])) {
+                converging[j] = false;
+                continue;
+            }
+            previous[j] = norm;
+            any = true;
+            for (int i = 0; i < size; ++i)
+                xs[j][i] += DD(correction(i, j));
+        }
+        if (!any)
+            break;
+    }
+    Eigen::Matrix<long double, Eigen::Dynamic, Eigen::Dynamic> out(ports, ports);
+    for (int j = 0; j < ports; ++j) {
+        // What the refinement leaves of a voltage that is exactly zero (a
+        // port the nulling shorts) is double-double rounding of the node
+        // voltages, ~1e-32 of them: a zero, not a resistance of 1e-92 Ω.
+        const double floor = 1e-28 * x.col(j).cwiseAbs().maxCoeff();
+        for (int i = 0; i < ports; ++i) {
+            const auto& nodesOf = model.capacitorNodes[i];
+            const DD v = voltage(xs[j], nodesOf[0]) - voltage(xs[j], nodesOf[1]);
+            const long double r = static_cast<long double>(v.hi) + static_cast<long double>(v.lo);
+            out(i, j) = std::abs(r) <= floor ? 0.0L : r;
+        }
+    }
+    return out;
+}
+
 // Port resistances of the state whose nodal matrix is `m` (ports in its
 // first rows) and whose DC components are `labels`. A floating component's
 // indicator w is both a left and a right null vector of m; adding w·wᵀ makes
@@ -48,11 +153,8 @@ std::vector<Eigen::VectorXd> floatingVectors(const std::vector<int>& labels, int
 PortResistance portResistance(const NodalModel& model, Eigen::MatrixXd m, const std::vector<int>& labels)
 {
     PortResistance out;
-    // The same matrix with G's entries summed in extended precision: a null
-    // resistance that is exactly zero (a port the nulling shorts) is a
-    // cancellation of node voltages, and only refinement against the exact
-    // sums, with the last correction kept apart, brings it to rounding of
-    // the result rather than of the voltages.
+    // The same matrix with G's entries summed in extended precision, for the
+    // factor's refinement (see portVoltages for the last digits).
     using Extended = long double;
     Eigen::Matrix<Extended, Eigen::Dynamic, Eigen::Dynamic> exact = m.cast<Extended>();
     exact.topLeftCorner(model.unknowns(), model.unknowns()) = model.extendedG;
@@ -67,9 +169,8 @@ PortResistance portResistance(const NodalModel& model, Eigen::MatrixXd m, const 
     Eigen::MatrixXd p = Eigen::MatrixXd::Zero(m.rows(), n);
     p.topRows(model.unknowns()) = model.ports;
     const Eigen::MatrixXd x = lu.solve(p);
-    const Eigen::MatrixXd correction = lu.solve(lu.residual(p, x).cast<double>(), 0);
-    const auto pExt = p.cast<Extended>();
-    out.r = (pExt.transpose() * (x.cast<Extended>() + correction.cast<Extended>())).cast<double>();
+    out.rExtended = portVoltages(model, m, labels, lu, p, x);
+    out.r = out.rExtended.cast<double>();
     out.finite.resize(n);
     for (int i = 0; i < n; ++i) {
         const auto& nodes = model.capacitorNodes[i];
@@ -281,15 +382,59 @@ std::optional<std::vector<double>> TimeConstantEngine::denominator() const
     return trimmed(elementarySymmetric(asComplex(eig.lambda)));
 }
 
+namespace {
+
+// The numerator's sums a_k/H⁰ = e_k(C^½·Rᴺ·C^½) from the null port matrix
+// itself, in extended precision. Rᴺ's principal minors are
+// det(R_SS)·H^S/H⁰: where shorting a set S nearly kills the transfer they
+// are small differences of Rᴺ's entries (1e7 below them on the test
+// networks), so Rᴺ enters with the digits its refinement found past double,
+// and the polynomial is formed in double-double (PrincipalMinorSums).
+std::vector<double> nullPortSums(const PortResistance& nulled, const Eigen::VectorXd& capacitance)
+{
+    const auto root = capacitance.cast<long double>().cwiseSqrt();
+    const Eigen::Matrix<long double, Eigen::Dynamic, Eigen::Dynamic> k =
+        root.asDiagonal() * nulled.rExtended * root.asDiagonal();
+    std::vector<double> e = principalMinorSums(k).e;
+    // Zero time constants (a capacitor loop, a port the nulling shorts) are
+    // zero eigenvalues that the entries' last digits make ~1e-18 of the
+    // largest: the coefficients from there on are that rounding. e_k/e_{k−1}
+    // is about the k-th largest eigenvalue; ρ bounds the largest.
+    double rho = 0.0;
+    for (size_t j = 1; j < e.size(); ++j)
+        rho = std::max(rho, std::pow(std::abs(e[j]), 1.0 / static_cast<double>(j)));
+    for (size_t j = 1; j < e.size(); ++j) {
+        bool restIsRounding = true;
+        for (size_t i = j; i < e.size() && restIsRounding; ++i)
+            restIsRounding = std::abs(e[i]) <= kZeroEigenvalue * 0.1 * std::pow(rho, static_cast<double>(i - j + 1)) *
+                                                      std::abs(e[j - 1]);
+        if (restIsRounding) {
+            e.resize(j);
+            break;
+        }
+    }
+    return e;
+}
+
+}  // namespace
+
 std::optional<std::vector<double>> TimeConstantEngine::numerator() const
 {
+    if (!dcValue_)
+        return std::nullopt;
+    if (model_.kind != ResponseKind::Impedance && nulled_.allFinite()) {
+        std::vector<double> poly = nullPortSums(nulled_, model_.capacitance);
+        for (auto& a : poly)
+            a *= *dcValue_;
+        return trimmed(poly);
+    }
     // Nulling the response is a rank-one change of the port matrix,
     // Rᴺ = R − h_out·h_inᵀ/H⁰ (h_in: port voltages per unit input, h_out:
     // output per unit port current), so with K = C^½RC^½ = Q·Λ·Qᵀ
     //   N(s) = H⁰·[Π(1 + sλ_k) − s·Σ_k α_k·β_k·Π_{j≠k}(1 + sλ_j)],
-    // α = Qᵀ·C^½·h_in, β = Qᵀ·C^½·h_out/H⁰: the time-constant sums of the
-    // numerator from the denominator's accurate eigenvalues.
-    if (!dcValue_ || !opened_.allFinite())
+    // α = Qᵀ·C^½·h_in, β = Qᵀ·C^½·h_out/H⁰: the fallback where the null
+    // state has an infinite port. Its terms cancel where H^S ≪ H⁰.
+    if (!opened_.allFinite())
         return std::nullopt;
     const Eigen::VectorXd root = model_.capacitance.cwiseSqrt();
     if (model_.kind == ResponseKind::Impedance && nulled_.allFinite()) {

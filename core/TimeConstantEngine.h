@@ -17,6 +17,11 @@ namespace tauline {
 struct PortResistance {
     bool defined = false;
     Eigen::MatrixXd r;
+    // The same before rounding to double: where ports lie close together
+    // (a capacitor loop, a port the nulling nearly shorts) the principal
+    // minors are differences of entries, and the numerator needs the digits
+    // past double.
+    Eigen::Matrix<long double, Eigen::Dynamic, Eigen::Dynamic> rExtended;
     std::vector<bool> finite;
     bool allFinite() const;
 };

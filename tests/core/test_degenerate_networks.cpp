@@ -166,3 +166,67 @@ TEST_CASE("undefined responses are errors that say why", "[engine][degenerate]")
         CHECK(std::string(e.what()).find("zero at every frequency") != std::string::npos);
     }
 }
+
+TEST_CASE("a port the nulling nearly shorts keeps its null resistance's digits", "[engine][degenerate]")
+{
+    // A transimpedance whose null state drives n2 and n7 to megavolts per
+    // ampere while C1 (n2–n7) sees 3.3e-5 Ω: the voltages cancel to 1e-11.
+    // Check value: the exact rational 4792783937/144786246622520 Ω from
+    // SymPy's exact nodal solve of this network (tests/reference/
+    // sympy_network.py, _port_view 'nulled'; Meurer et al., SymPy, PeerJ
+    // Computer Science 3:e103, 2017). The network is generated (reference
+    // seed 61594), not a design.
+    Network net = transfer(ResponseKind::Transimpedance,
+                           {part("C1", 120e-9, "n2", "n7"), part("R1", 3.7, "n5", "n7"),
+                            part("C2", 460e-9, "n1", "n7"), part("C3", 55e-9, "n2", "n3"),
+                            part("R2", 52e3, kGroundNode, "n5"), part("C4", 2.4e-7, "n4", "n3"),
+                            part("R3", 8.7, "n7", "n6"), part("R4", 36.9, "n6", "n3"),
+                            part("R5", 2.6e6, kGroundNode, "n4"), part("R6", 33.7e3, "n6", "n1"),
+                            part("R7", 143e4, "n3", "n5"), part("R8", 270e3, "n3", "n1"),
+                            part("R9", 7.1e6, "n2", kGroundNode), part("C5", 33e-9, "n2", "n3"),
+                            part("C6", 3.98e-8, "n7", "n2"), part("C7", 55e-9, "n3", "n6"),
+                            part("R10", 368e3, kGroundNode, "n4"), part("C8", 16e-9, "n4", "n7"),
+                            part("C9", 1.3e-6, "n4", "n7"), part("C10", 58e-6, "n7", kGroundNode)},
+                           "n5", "n1");
+    net.response.output = {"n1", "n2"};
+    const NodalModel model = buildNodalModel(net);
+    const TimeConstantEngine engine(model, solveExact(model));
+    const double exact = 4792783937.0 / 144786246622520.0;
+    for (const auto& tc : engine.firstOrder()) {
+        if (tc.element != "C1" && tc.element != "C6" && tc.element != "C10")
+            continue;
+        INFO(tc.element);
+        REQUIRE(tc.rNull);
+        // 3e-8 off while the port voltage was a difference of node voltages
+        // summed from the long-double matrix.
+        CHECK(closeRelative(*tc.rNull, exact, 1e-12));
+    }
+}
+
+TEST_CASE("ports the nulling shorts have a null resistance of exactly zero", "[engine][degenerate]")
+{
+    // A three-section low-pass into a resistive load: with the output held
+    // at 0 V (null double injection) no current flows in the load, so the
+    // series resistors carry none and every node ahead of the output sits
+    // at 0 V — the shunt capacitors see exactly 0 Ω (Middlebrook, "Null
+    // double injection and the extra element theorem", IEEE Trans.
+    // Education 32(3), 1989; the conclusion from circuit laws, common
+    // practice). Rounding of the refined node voltages must not leave
+    // 1e-90 Ω there.
+    const Analysis a = analyze(transfer(ResponseKind::VoltageGain,
+                                        {part("R1", 2.2e3, "in", "a"), part("C1", 220e-9, "a", kGroundNode),
+                                         part("R2", 47e3, "a", "b"), part("C2", 1e-9, "b", kGroundNode),
+                                         part("R3", 100e3, "b", "out"), part("C3", 47e-12, "b", "out"),
+                                         part("R4", 100e3, "out", kGroundNode)},
+                                        "in", "out"));
+    REQUIRE(a.timeConstants.size() == 3);
+    for (int i : {0, 1}) {
+        INFO(a.timeConstants[i].element);
+        REQUIRE(a.timeConstants[i].rNull);
+        CHECK(*a.timeConstants[i].rNull == 0.0);
+        CHECK(*a.timeConstants[i].tauNull == 0.0);
+    }
+    // C3 bridges R3 with the output held: it sees R3 alone.
+    REQUIRE(a.timeConstants[2].rNull);
+    CHECK(*a.timeConstants[2].rNull == Approx(100e3).epsilon(1e-12));
+}
