@@ -1,39 +1,13 @@
-// Small builders for networks written inline in the engine tests.
+// What the engine tests write their networks with: the builders, shared with
+// the other tests (tests/support/NetworkBuilding.h), and a closeness test.
 #pragma once
 
-#include "Network.h"
+#include "NetworkBuilding.h"
 
-#include <initializer_list>
-#include <string>
+#include <algorithm>
+#include <cmath>
 
 namespace tauline::testing {
-
-inline Part part(const std::string& name, double value, const std::string& a, const std::string& b)
-{
-    Part p;
-    p.name = name;
-    p.kind = name[0] == 'C' ? PartKind::Capacitor : PartKind::Resistor;
-    p.value = value;
-    p.nodes = {a, b};
-    return p;
-}
-
-inline Network impedance(std::initializer_list<Part> parts, const std::string& p, const std::string& n = kGroundNode)
-{
-    Network net;
-    net.parts = parts;
-    net.response = {ResponseKind::Impedance, {p, n}, {p, n}};
-    return net;
-}
-
-inline Network transfer(ResponseKind kind, std::initializer_list<Part> parts, const std::string& in,
-                        const std::string& out)
-{
-    Network net;
-    net.parts = parts;
-    net.response = {kind, {in, kGroundNode}, {out, kGroundNode}};
-    return net;
-}
 
 // Relative closeness for coefficients and roots.
 inline bool closeRelative(double a, double b, double tol)

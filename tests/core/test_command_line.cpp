@@ -1,6 +1,6 @@
 // The command line as scripts meet it (command-line.md): exit status, where
 // messages go, and the shape and numbers of the JSON and CSV it prints.
-#include "CommandLine.h"
+#include "CommandLineRun.h"
 
 #include <catch2/catch.hpp>
 #include <nlohmann/json.hpp>
@@ -12,28 +12,11 @@
 #include <string>
 #include <vector>
 
+using Run = tauline::testing::CommandLineRun;
+using tauline::testing::contains;
+using tauline::testing::runTauline;
+
 namespace {
-
-struct Run {
-    int status = -1;
-    std::string out;
-    std::string err;
-};
-
-Run run(std::vector<std::string> arguments)
-{
-    arguments.insert(arguments.begin(), "tauline");
-    std::vector<char*> argv;
-    for (auto& a : arguments)
-        argv.push_back(a.data());
-    argv.push_back(nullptr);
-    std::ostringstream out, err;
-    Run r;
-    r.status = tauline::runCommandLine(int(arguments.size()), argv.data(), out, err);
-    r.out = out.str();
-    r.err = err.str();
-    return r;
-}
 
 std::string data(const std::string& name)
 {
@@ -52,11 +35,6 @@ std::vector<std::string> lines(const std::string& text)
     for (std::string line; std::getline(in, line);)
         out.push_back(line);
     return out;
-}
-
-bool contains(const std::string& text, const std::string& piece)
-{
-    return text.find(piece) != std::string::npos;
 }
 
 // The example network of command-line.md: R1 = 4.7 kΩ in series with
@@ -109,7 +87,7 @@ TEST_CASE("bad usage exits with 2 and says why on stderr", "[cli]")
         for (const auto& a : arguments)
             shown += a + " ";
         INFO("tauline " << shown);
-        Run r = run(arguments);
+        Run r = runTauline(arguments);
         CHECK(r.status == 2);
         CHECK(r.out.empty());
         CHECK(r.err.rfind("tauline: ", 0) == 0);
@@ -119,7 +97,7 @@ TEST_CASE("bad usage exits with 2 and says why on stderr", "[cli]")
 
 TEST_CASE("usage is checked before the file is read", "[cli]")
 {
-    Run r = run({"sweep", data("no-such-file.tauline"), "--at", "nonsense"});
+    Run r = runTauline({"sweep", data("no-such-file.tauline"), "--at", "nonsense"});
     CHECK(r.status == 2);
     CHECK(contains(r.err, "--at"));
 }
@@ -127,14 +105,14 @@ TEST_CASE("usage is checked before the file is read", "[cli]")
 TEST_CASE("help exits with 0 and documents the frequency prefixes", "[cli]")
 {
     for (const auto& arguments : std::vector<std::vector<std::string>>{{"--help"}, {"help"}, {"-h"}}) {
-        Run r = run(arguments);
+        Run r = runTauline(arguments);
         CHECK(r.status == 0);
         CHECK(contains(r.out, "tauline analyze FILE [--json]"));
         CHECK(contains(r.out, "m is milli, M is mega"));
         CHECK(r.err.empty());
     }
-    CHECK(run({"analyze", "--help"}).status == 0);
-    CHECK(contains(run({"sweep", "--help"}).out, "--points"));
+    CHECK(runTauline({"analyze", "--help"}).status == 0);
+    CHECK(contains(runTauline({"sweep", "--help"}).out, "--points"));
 }
 
 TEST_CASE("a file that cannot be read exits with 1, one line per problem naming the file", "[cli]")
@@ -144,7 +122,7 @@ TEST_CASE("a file that cannot be read exits with 1, one line per problem naming 
         std::vector<std::string> arguments = {command, path};
         if (std::string(command) == "sweep")
             arguments.insert(arguments.end(), {"--at", "1k", "--csv"});
-        Run r = run(arguments);
+        Run r = runTauline(arguments);
         CHECK(r.status == 1);
         CHECK(r.out.empty());
         auto errLines = lines(r.err);
@@ -152,7 +130,7 @@ TEST_CASE("a file that cannot be read exits with 1, one line per problem naming 
         for (const auto& line : errLines)
             CHECK(line.rfind(path + ": part ", 0) == 0);
     }
-    Run missing = run({"analyze", data("no-such-file.tauline")});
+    Run missing = runTauline({"analyze", data("no-such-file.tauline")});
     CHECK(missing.status == 1);
     CHECK(missing.err.rfind(data("no-such-file.tauline") + ": ", 0) == 0);
 }
@@ -161,7 +139,7 @@ TEST_CASE("an undefined response exits with 1 and names the file", "[cli][engine
 {
     for (const auto& name : {"undefined-no-path.tauline", "undefined-zero-response.tauline"}) {
         INFO(name);
-        Run r = run({"analyze", data(name), "--json"});
+        Run r = runTauline({"analyze", data(name), "--json"});
         CHECK(r.status == 1);
         CHECK(r.out.empty());
         auto errLines = lines(r.err);
@@ -173,7 +151,7 @@ TEST_CASE("an undefined response exits with 1 and names the file", "[cli][engine
 
 TEST_CASE("analyze --json has every field of the contract with the right numbers", "[cli][engine]")
 {
-    Run r = run({"analyze", data("divider-impedance.tauline"), "--json"});
+    Run r = runTauline({"analyze", data("divider-impedance.tauline"), "--json"});
     REQUIRE(r.status == 0);
     CHECK(r.err.empty());
     const nlohmann::json j = nlohmann::json::parse(r.out);
@@ -229,7 +207,7 @@ TEST_CASE("infinite quantities are null with a sibling saying so", "[cli][engine
 {
     // R1 = 1 kΩ in series with C1 = 1 µF: Z(s) = (1 + s·R1·C1) / (s·C1), by
     // inspection (common practice, no source).
-    Run r = run({"analyze", data("series-capacitor-impedance.tauline"), "--json"});
+    Run r = runTauline({"analyze", data("series-capacitor-impedance.tauline"), "--json"});
     REQUIRE(r.status == 0);
     const nlohmann::json j = nlohmann::json::parse(r.out);
     CHECK(j["dc"]["limit"] == "infinite");
@@ -253,7 +231,7 @@ TEST_CASE("infinite quantities are null with a sibling saying so", "[cli][engine
 TEST_CASE("a separate piece is a warning, in the JSON and on stderr", "[cli][engine]")
 {
     const std::string path = data("separate-piece.tauline");
-    Run r = run({"analyze", path, "--json"});
+    Run r = runTauline({"analyze", path, "--json"});
     REQUIRE(r.status == 0);
     const nlohmann::json j = nlohmann::json::parse(r.out);
     REQUIRE_FALSE(j["warnings"].empty());
@@ -261,14 +239,14 @@ TEST_CASE("a separate piece is a warning, in the JSON and on stderr", "[cli][eng
     for (const auto& tc : j["time_constants"])
         CHECK(tc["element"] != "C9");
 
-    Run table = run({"analyze", path});
+    Run table = runTauline({"analyze", path});
     CHECK(table.status == 0);
     CHECK(contains(table.out, "Warnings:"));
 }
 
 TEST_CASE("the readable table shows time constants and corners", "[cli][engine]")
 {
-    Run r = run({"analyze", data("divider-impedance.tauline")});
+    Run r = runTauline({"analyze", data("divider-impedance.tauline")});
     REQUIRE(r.status == 0);
     CHECK(contains(r.out, "Response:  impedance between in and gnd"));
     CHECK(contains(r.out, "Time constants"));
@@ -280,19 +258,19 @@ TEST_CASE("the readable table shows time constants and corners", "[cli][engine]"
 
 TEST_CASE("mains networks carry the caution", "[cli][engine]")
 {
-    Run table = run({"analyze", sample("mains-dimmer-snubber.tauline")});
+    Run table = runTauline({"analyze", sample("mains-dimmer-snubber.tauline")});
     REQUIRE(table.status == 0);
     CHECK(contains(table.out, "Caution:"));
     CHECK(contains(table.out, "licensed practice"));
-    Run json = run({"analyze", sample("mains-dimmer-snubber.tauline"), "--json"});
+    Run json = runTauline({"analyze", sample("mains-dimmer-snubber.tauline"), "--json"});
     REQUIRE(json.status == 0);
     CHECK(nlohmann::json::parse(json.out).contains("caution"));
-    CHECK_FALSE(contains(run({"analyze", sample("sensor-anti-alias.tauline")}).out, "Caution:"));
+    CHECK_FALSE(contains(runTauline({"analyze", sample("sensor-anti-alias.tauline")}).out, "Caution:"));
 }
 
 TEST_CASE("sweep --csv: header, sorted rows without duplicates, exact values", "[cli][engine]")
 {
-    Run r = run({"sweep", data("divider-impedance.tauline"), "--at", "10k,100,10k", "--at", "1M", "--csv"});
+    Run r = runTauline({"sweep", data("divider-impedance.tauline"), "--at", "10k,100,10k", "--at", "1M", "--csv"});
     REQUIRE(r.status == 0);
     auto rows = lines(r.out);
     REQUIRE(rows.size() == 4);
@@ -319,7 +297,8 @@ TEST_CASE("sweep --csv: header, sorted rows without duplicates, exact values", "
 
 TEST_CASE("sweep --json over a log range", "[cli][engine]")
 {
-    Run r = run({"sweep", data("divider-impedance.tauline"), "--from", "10", "--to", "1M", "--points", "51", "--json"});
+    Run r = runTauline(
+        {"sweep", data("divider-impedance.tauline"), "--from", "10", "--to", "1M", "--points", "51", "--json"});
     REQUIRE(r.status == 0);
     const nlohmann::json j = nlohmann::json::parse(r.out);
     REQUIRE(j.is_array());
@@ -335,7 +314,7 @@ TEST_CASE("sweep --json over a log range", "[cli][engine]")
 
 TEST_CASE("sweep prints a table by default", "[cli][engine]")
 {
-    Run r = run({"sweep", data("divider-impedance.tauline"), "--at", "1k"});
+    Run r = runTauline({"sweep", data("divider-impedance.tauline"), "--at", "1k"});
     REQUIRE(r.status == 0);
     CHECK(contains(r.out, "1 kHz"));
     CHECK(contains(r.out, "phase"));
@@ -346,7 +325,7 @@ TEST_CASE("every sample analyses from the command line", "[cli][engine][samples]
     for (const char* name : {"buck-type2-compensator.tauline", "guitar-treble-shelf.tauline",
                              "mains-dimmer-snubber.tauline", "sensor-anti-alias.tauline", "woofer-zobel.tauline"}) {
         INFO(name);
-        Run r = run({"analyze", sample(name), "--json"});
+        Run r = runTauline({"analyze", sample(name), "--json"});
         CHECK(r.status == 0);
         CHECK(nlohmann::json::parse(r.out).contains("breakpoints"));
     }

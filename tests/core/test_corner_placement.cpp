@@ -2,7 +2,8 @@
 // targets the corner cannot reach must say why.
 #include "CornerPlacement.h"
 #include "Errors.h"
-#include "NetworkFile.h"
+#include "NetworkBuilding.h"
+#include "NetworkTexts.h"
 #include "RandomNetwork.h"
 #include "StandardSeries.h"
 
@@ -12,20 +13,10 @@
 #include <numbers>
 #include <random>
 
+using tauline::testing::networkOf;
+using tauline::testing::withValue;
+
 namespace {
-
-tauline::Network networkOf(const char* text)
-{
-    return tauline::parseNetworkText(text, "test network").network;
-}
-
-tauline::Network withValue(tauline::Network network, const std::string& part, double value)
-{
-    for (auto& p : network.parts)
-        if (p.name == part)
-            p.value = value;
-    return network;
-}
 
 // An RC low-pass divider: R1 from in to out, R2 and C1 from out to gnd.
 constexpr const char* kDivider = R"({
@@ -51,12 +42,7 @@ std::string messageOf(const std::function<void()>& f)
 TEST_CASE("Placing a single RC pole gives R = 1 / (2 pi f C)", "[placement]")
 {
     // common practice (no source): f = 1 / (2 pi R C).
-    const tauline::Network network = networkOf(R"({
-      "format": "tauline-network", "version": 1,
-      "parts": [
-        {"name": "R1", "kind": "resistor",  "value": "10k", "nodes": ["p", "gnd"]},
-        {"name": "C1", "kind": "capacitor", "value": "2n2", "nodes": ["p", "gnd"]}],
-      "response": {"kind": "impedance", "port": ["p", "gnd"]}})");
+    const tauline::Network network = networkOf(tauline::testing::kSingleRcPort);
     tauline::PlacementRequest request;
     request.corner = 0;
     request.targetHz = 1000.0;
@@ -182,13 +168,7 @@ TEST_CASE("A corner cannot pass the corner its limit lies on", "[placement]")
     // has its zero at (R1 + R2) / (2 pi R1 R2 C1), which falls towards the
     // pole 1 / (2 pi R2 C1) = 7.234 kHz as R1 grows and never passes it (an
     // RC impedance's poles and zeros alternate; from memory).
-    const tauline::Network network = networkOf(R"({
-      "format": "tauline-network", "version": 1,
-      "parts": [
-        {"name": "R1", "kind": "resistor",  "value": "4k7", "nodes": ["in", "mid"]},
-        {"name": "R2", "kind": "resistor",  "value": "10k", "nodes": ["mid", "gnd"]},
-        {"name": "C1", "kind": "capacitor", "value": "2n2", "nodes": ["mid", "gnd"]}],
-      "response": {"kind": "impedance", "port": ["in", "gnd"]}})");
+    const tauline::Network network = networkOf(tauline::testing::kDividerImpedance);
     tauline::PlacementRequest request;
     request.corner = 1;
     request.targetHz = 5000.0;
@@ -208,14 +188,7 @@ TEST_CASE("A complex pair that would have to split says so", "[placement]")
     // (R1 + R2)²·C2² < 4·R1·R2·C1·C2, i.e. C1 > 1 nF here; at C1 = 1 nF it
     // splits, at |s| = 1/sqrt(R1 R2 C1 C2), 15.92 kHz. Above that it is no
     // longer one corner. Below, f = 1/(2 pi sqrt(R1 R2 C1 C2)) gives C1.
-    const tauline::Network network = networkOf(R"({
-      "format": "tauline-network", "version": 1,
-      "parts": [
-        {"name": "R1", "kind": "resistor",  "value": "10k",  "nodes": ["in", "m"]},
-        {"name": "R2", "kind": "resistor",  "value": "10k",  "nodes": ["m", "out"]},
-        {"name": "C1", "kind": "capacitor", "value": "100n", "nodes": ["m", "gnd"]},
-        {"name": "C2", "kind": "capacitor", "value": "1n",   "nodes": ["in", "out"]}],
-      "response": {"kind": "voltage-gain", "input": ["in", "gnd"], "output": ["out", "gnd"]}})");
+    const tauline::Network network = networkOf(tauline::testing::kBridgedT);
     const tauline::Analysis a = tauline::analyze(network);
     REQUIRE(a.breakpoints.size() == 3);
     REQUIRE(a.breakpoints[1].q);

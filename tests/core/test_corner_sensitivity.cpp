@@ -1,38 +1,19 @@
 // Which parts set a corner: normalised sensitivities d ln f / d ln x by
 // central differences, checked against closed forms and scaling laws.
 #include "CornerSensitivity.h"
-#include "NetworkFile.h"
+#include "NetworkBuilding.h"
+#include "NetworkTexts.h"
+#include "SensitivityByPart.h"
 
 #include <catch2/catch.hpp>
 
-#include <map>
-
-namespace {
-
-tauline::Network networkOf(const char* text)
-{
-    return tauline::parseNetworkText(text, "test network").network;
-}
-
-std::map<std::string, double> byPart(const tauline::CornerSensitivity& corner)
-{
-    std::map<std::string, double> out;
-    for (const auto& p : corner.parts)
-        out[p.part] = p.value;
-    return out;
-}
-
-}  // namespace
+using tauline::testing::byPart;
+using tauline::testing::networkOf;
 
 TEST_CASE("A single RC pole depends on R and C with sensitivity -1 each", "[sensitivity]")
 {
     // from memory: f = 1 / (2 pi R C), so d ln f / d ln R = d ln f / d ln C = -1.
-    const tauline::Network network = networkOf(R"({
-      "format": "tauline-network", "version": 1,
-      "parts": [
-        {"name": "R1", "kind": "resistor",  "value": "10k", "nodes": ["p", "gnd"]},
-        {"name": "C1", "kind": "capacitor", "value": "2n2", "nodes": ["p", "gnd"]}],
-      "response": {"kind": "impedance", "port": ["p", "gnd"]}})");
+    const tauline::Network network = networkOf(tauline::testing::kSingleRcPort);
     const tauline::Analysis a = tauline::analyze(network);
     const auto s = tauline::cornerSensitivities(network, a);
     REQUIRE(s.size() == 1);

@@ -1,6 +1,6 @@
 // `tauline analyze` with expressions, the factored form and close pairs:
 // the fields scripts read, and the human table's sections.
-#include "CommandLine.h"
+#include "CommandLineRun.h"
 
 #include <catch2/catch.hpp>
 #include <nlohmann/json.hpp>
@@ -8,7 +8,6 @@
 #include <cmath>
 #include <filesystem>
 #include <fstream>
-#include <sstream>
 
 namespace {
 
@@ -26,18 +25,13 @@ std::string analyzeFile(const std::string& text, bool json)
 {
     const auto path = std::filesystem::temp_directory_path() / "tauline-expression-output.tauline";
     std::ofstream(path) << text;
-    std::vector<std::string> arguments{"tauline", "analyze", path.string()};
+    std::vector<std::string> arguments{"analyze", path.string()};
     if (json)
         arguments.push_back("--json");
-    std::vector<char*> argv;
-    for (auto& a : arguments)
-        argv.push_back(a.data());
-    argv.push_back(nullptr);
-    std::ostringstream out, err;
-    const int status = tauline::runCommandLine(static_cast<int>(arguments.size()), argv.data(), out, err);
+    const auto run = tauline::testing::runTauline(arguments);
     std::filesystem::remove(path);
-    REQUIRE(status == 0);
-    return out.str();
+    REQUIRE(run.status == 0);
+    return run.out;
 }
 
 }  // namespace

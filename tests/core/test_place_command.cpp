@@ -1,38 +1,20 @@
 // `tauline place` as scripts meet it: exit status, messages, the JSON fields
 // and the numbers in them.
-#include "CommandLine.h"
+#include "CommandLineRun.h"
 
 #include <catch2/catch.hpp>
 #include <nlohmann/json.hpp>
 
 #include <cmath>
 #include <numbers>
-#include <sstream>
 #include <string>
 #include <vector>
 
+using Run = tauline::testing::CommandLineRun;
+using tauline::testing::contains;
+using tauline::testing::runTauline;
+
 namespace {
-
-struct Run {
-    int status = -1;
-    std::string out;
-    std::string err;
-};
-
-Run run(std::vector<std::string> arguments)
-{
-    arguments.insert(arguments.begin(), "tauline");
-    std::vector<char*> argv;
-    for (auto& a : arguments)
-        argv.push_back(a.data());
-    argv.push_back(nullptr);
-    std::ostringstream out, err;
-    Run r;
-    r.status = tauline::runCommandLine(int(arguments.size()), argv.data(), out, err);
-    r.out = out.str();
-    r.err = err.str();
-    return r;
-}
 
 // R1 = 4.7 kΩ in series with R2 = 10 kΩ ∥ C1 = 2.2 nF, the impedance at in.
 // Common practice (no source): Z = (R1 + R2 + s R1 R2 C1) / (1 + s R2 C1),
@@ -41,16 +23,11 @@ Run run(std::vector<std::string> arguments)
 const std::string kDivider = std::string(TAULINE_TEST_DATA_DIR) + "/divider-impedance.tauline";
 constexpr double R2 = 10e3, C1 = 2.2e-9;
 
-bool contains(const std::string& text, const std::string& piece)
-{
-    return text.find(piece) != std::string::npos;
-}
-
 }  // namespace
 
 TEST_CASE("place moves the pole to the target and prints the exact and series values", "[cli][place]")
 {
-    const Run r = run({"place", kDivider, "--corner", "1", "--to", "5k", "--vary", "R2", "--json"});
+    const Run r = runTauline({"place", kDivider, "--corner", "1", "--to", "5k", "--vary", "R2", "--json"});
     INFO(r.err);
     REQUIRE(r.status == 0);
     const auto j = nlohmann::json::parse(r.out);
@@ -67,7 +44,7 @@ TEST_CASE("place moves the pole to the target and prints the exact and series va
     CHECK(j["nearest"][1]["value"].get<double>() == Approx(15e3).epsilon(1e-12));
     CHECK(j["nearest"][1]["hz"].get<double>() == Approx(1.0 / (2.0 * std::numbers::pi * 15e3 * C1)).epsilon(1e-10));
 
-    const Run text = run({"place", kDivider, "--corner", "1", "--to", "5k", "--vary", "R2", "--series", "E12"});
+    const Run text = runTauline({"place", kDivider, "--corner", "1", "--to", "5k", "--vary", "R2", "--series", "E12"});
     REQUIRE(text.status == 0);
     CHECK(contains(text.out, "exact"));
     CHECK(contains(text.out, "E12"));
@@ -79,7 +56,7 @@ TEST_CASE("place picks the most sensitive part by default", "[cli][place]")
 {
     // The pole 1 / (2 pi R2 C1) depends on R2 and C1 alone (-1 each): the
     // first of them is varied.
-    const Run r = run({"place", kDivider, "--corner", "1", "--to", "10k", "--json"});
+    const Run r = runTauline({"place", kDivider, "--corner", "1", "--to", "10k", "--json"});
     REQUIRE(r.status == 0);
     const auto j = nlohmann::json::parse(r.out);
     CHECK((j["part"] == "R2" || j["part"] == "C1"));
@@ -90,13 +67,13 @@ TEST_CASE("an unreachable target exits with 1 and names the limit", "[cli][place
 {
     // The zero (R1 + R2) / (2 pi R1 R2 C1) falls towards 1 / (2 pi R2 C1) =
     // 7.234 kHz as R1 grows, and never below.
-    const Run r = run({"place", kDivider, "--corner", "2", "--to", "5k", "--vary", "R1"});
+    const Run r = runTauline({"place", kDivider, "--corner", "2", "--to", "5k", "--vary", "R1"});
     CHECK(r.status == 1);
     CHECK(r.out.empty());
     CHECK(contains(r.err, kDivider + ": cannot move corner 2"));
     CHECK(contains(r.err, "7.234 kHz"));
 
-    const Run ok = run({"place", kDivider, "--corner", "2", "--to", "10k", "--vary", "R1", "--json"});
+    const Run ok = runTauline({"place", kDivider, "--corner", "2", "--to", "10k", "--vary", "R1", "--json"});
     REQUIRE(ok.status == 0);
     const double expected = R2 / (2.0 * std::numbers::pi * 10e3 * R2 * C1 - 1.0);
     CHECK(nlohmann::json::parse(ok.out)["value"].get<double>() == Approx(expected).epsilon(1e-10));
@@ -114,15 +91,15 @@ TEST_CASE("place: bad usage exits with 2, a bad file with 1", "[cli][place]")
              {"place", kDivider, "--corner", "1", "--to", "5k", "--series", "E7"},
              {"place", kDivider, "--corner", "1", "--to", "5k", "--vary", "R7"},
              {"place", "--corner", "1", "--to", "5k"}}) {
-        const Run r = run(args);
+        const Run r = runTauline(args);
         INFO(r.err);
         CHECK(r.status == 2);
         CHECK(r.out.empty());
         CHECK(contains(r.err, "tauline: "));
     }
-    const Run missing = run({"place", "/nonexistent/none.tauline", "--corner", "1", "--to", "5k"});
+    const Run missing = runTauline({"place", "/nonexistent/none.tauline", "--corner", "1", "--to", "5k"});
     CHECK(missing.status == 1);
-    const Run help = run({"place", "--help"});
+    const Run help = runTauline({"place", "--help"});
     CHECK(help.status == 0);
     CHECK(contains(help.out, "--corner N"));
 }

@@ -3,8 +3,10 @@
 // scaling identities.
 #include "CornerSensitivity.h"
 #include "Errors.h"
-#include "NetworkFile.h"
+#include "NetworkBuilding.h"
+#include "NetworkTexts.h"
 #include "RandomNetwork.h"
+#include "SensitivityByPart.h"
 
 #include <catch2/catch.hpp>
 
@@ -12,20 +14,10 @@
 #include <map>
 #include <random>
 
+using tauline::testing::byPart;
+using tauline::testing::networkOf;
+
 namespace {
-
-tauline::Network networkOf(const char* text)
-{
-    return tauline::parseNetworkText(text, "test network").network;
-}
-
-std::map<std::string, double> byPart(const tauline::CornerSensitivity& corner)
-{
-    std::map<std::string, double> out;
-    for (const auto& p : corner.parts)
-        out[p.part] = p.value;
-    return out;
-}
 
 // The nearest other corner, in decades: central differences of step 1e-4
 // are only trustworthy for corners well clear of their neighbours.
@@ -44,12 +36,7 @@ TEST_CASE("Exact sensitivities of a single RC pole are -1 for R and for C", "[se
 {
     // common practice (no source): f = 1 / (2 pi R C), so d ln f / d ln R =
     // d ln f / d ln C = -1.
-    const tauline::Network network = networkOf(R"({
-      "format": "tauline-network", "version": 1,
-      "parts": [
-        {"name": "R1", "kind": "resistor",  "value": "10k", "nodes": ["p", "gnd"]},
-        {"name": "C1", "kind": "capacitor", "value": "2n2", "nodes": ["p", "gnd"]}],
-      "response": {"kind": "impedance", "port": ["p", "gnd"]}})");
+    const tauline::Network network = networkOf(tauline::testing::kSingleRcPort);
     const auto s = tauline::cornerSensitivities(network, tauline::analyze(network));
     REQUIRE(s.size() == 1);
     CHECK(s[0].method == tauline::SensitivityMethod::Exact);
@@ -198,14 +185,7 @@ TEST_CASE("A complex zero pair moves as the square root of each part", "[sensiti
     // python3-sympy) the numerator is 1 + s·C2·(R1 + R2) + s²·R1·R2·C1·C2: with
     // C1 = 100 nF, C2 = 1 nF, R1 = R2 = 10 kΩ a complex pair with
     // |s| = 1/sqrt(R1 R2 C1 C2), so d ln f / d ln x = -1/2 for all four.
-    const tauline::Network network = networkOf(R"({
-      "format": "tauline-network", "version": 1,
-      "parts": [
-        {"name": "R1", "kind": "resistor",  "value": "10k",  "nodes": ["in", "m"]},
-        {"name": "R2", "kind": "resistor",  "value": "10k",  "nodes": ["m", "out"]},
-        {"name": "C1", "kind": "capacitor", "value": "100n", "nodes": ["m", "gnd"]},
-        {"name": "C2", "kind": "capacitor", "value": "1n",   "nodes": ["in", "out"]}],
-      "response": {"kind": "voltage-gain", "input": ["in", "gnd"], "output": ["out", "gnd"]}})");
+    const tauline::Network network = networkOf(tauline::testing::kBridgedT);
     const tauline::Analysis a = tauline::analyze(network);
     const auto s = tauline::cornerSensitivities(network, a);
     int pairs = 0;

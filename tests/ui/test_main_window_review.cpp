@@ -7,6 +7,7 @@
 #include "MainWindow.h"
 #include "NetworkFile.h"
 #include "ReferenceCurve.h"
+#include "ReferenceCurvePoints.h"
 #include "ReviewPage.h"
 #include "ReviewPageExport.h"
 #include "SchematicDocument.h"
@@ -26,6 +27,7 @@
 #include <cstdlib>
 
 using namespace tauline::ui;
+using tauline::testing::referencePoints;
 
 namespace {
 
@@ -46,15 +48,6 @@ QAction* action(const MainWindow& window, const char* name)
     auto* found = window.findChild<QAction*>(QString::fromLatin1(name));
     REQUIRE(found);
     return found;
-}
-
-QList<QPointF> referencePoints(const BodeChart& chart)
-{
-    QList<QPointF> points;
-    for (QLineSeries* s : chart.reference()->series())
-        if (s->isVisible())
-            points += s->points();
-    return points;
 }
 
 double exactDb(const tauline::Analysis& a, double x)

@@ -5,6 +5,7 @@
 #include "CornerTable.h"
 #include "MainWindow.h"
 #include "NetworkFile.h"
+#include "NetworkTexts.h"
 #include "PlacementPanel.h"
 #include "SchematicDocument.h"
 #include "SensitivityView.h"
@@ -31,13 +32,7 @@ namespace {
 // R1 = 4.7 kΩ in series with R2 = 10 kΩ ∥ C1 = 2.2 nF, the impedance at in.
 // Common practice (no source): a pole at 1 / (2 pi R2 C1) (corner 1) and a
 // zero at (R1 + R2) / (2 pi R1 R2 C1) (corner 2).
-constexpr const char* kDivider = R"({
-  "format": "tauline-network", "version": 1,
-  "parts": [
-    {"name": "R1", "kind": "resistor",  "value": "4k7", "nodes": ["in", "mid"]},
-    {"name": "R2", "kind": "resistor",  "value": "10k", "nodes": ["mid", "gnd"]},
-    {"name": "C1", "kind": "capacitor", "value": "2n2", "nodes": ["mid", "gnd"]}],
-  "response": {"kind": "impedance", "port": ["in", "gnd"]}})";
+constexpr const char* kDivider = tauline::testing::kDividerImpedance;
 constexpr double C1 = 2.2e-9;
 
 double partValue(const SchematicDocument& document, const char* name)

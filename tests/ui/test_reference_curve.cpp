@@ -6,6 +6,7 @@
 #include "ReferenceCurve.h"
 #include "ReferenceCurveActions.h"
 #include "PlotExport.h"
+#include "ReferenceCurvePoints.h"
 
 #include <QAction>
 #include <QGraphicsScene>
@@ -17,6 +18,7 @@
 #include <numbers>
 
 using namespace tauline::ui;
+using tauline::testing::referencePoints;
 
 namespace {
 
@@ -27,15 +29,6 @@ tauline::Network rcPort(double r, double c)
     n.parts.push_back({"C1", tauline::PartKind::Capacitor, c, "", {"p", "gnd"}, {}});
     n.response = {tauline::ResponseKind::Impedance, {"p", "gnd"}, {"p", "gnd"}};
     return n;
-}
-
-QList<QPointF> referencePoints(const BodeChart& chart)
-{
-    QList<QPointF> points;
-    for (QLineSeries* s : chart.reference()->series())
-        if (s->isVisible())
-            points += s->points();
-    return points;
 }
 
 // |Z| of R ∥ C in dB-ohm at f: R / sqrt(1 + (2π f R C)²) (common practice,
