@@ -2,11 +2,14 @@
 
 #include "BodeChart.h"
 #include "ReferenceCurve.h"
+#include "SvgTextRuns.h"
 
 #include <QBuffer>
 #include <QGraphicsScene>
+#include <QGuiApplication>
 #include <QPainter>
 #include <QSaveFile>
+#include <QScreen>
 #include <QSvgGenerator>
 
 namespace tauline::ui {
@@ -60,6 +63,10 @@ QByteArray plotSvg(const PlotSnapshot& snapshot, QSize size)
     buffer.open(QIODevice::WriteOnly);
     QSvgGenerator svg;
     svg.setOutputDevice(&buffer);
+    // The resolution the chart lays its text out for (the screen's), so the
+    // font sizes written are the ones the text was placed with.
+    const QScreen* screen = QGuiApplication::primaryScreen();
+    svg.setResolution(screen ? qRound(screen->logicalDotsPerInchY()) : 96);
     svg.setSize(size);
     svg.setViewBox(QRect(QPoint(0, 0), size));
     svg.setTitle(snapshot.title.isEmpty() ? QStringLiteral("Bode plot") : snapshot.title);
@@ -70,7 +77,7 @@ QByteArray plotSvg(const PlotSnapshot& snapshot, QSize size)
         painter.setRenderHint(QPainter::Antialiasing);
         scene.render(&painter, rect, rect);
     });
-    return bytes;
+    return joinScriptRuns(bytes);
 }
 
 QImage plotImage(const PlotSnapshot& snapshot, QSize size, qreal scale)

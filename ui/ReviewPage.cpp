@@ -11,6 +11,7 @@
 #include "SchematicItem.h"
 #include "SchematicPicture.h"
 #include "SchematicScene.h"
+#include "SvgTextRuns.h"
 #include "PlotExport.h"
 
 #include <QBuffer>
@@ -490,7 +491,7 @@ QByteArray reviewPageSvg(const ReviewContent& content)
     painter.fillRect(QRect(QPoint(0, 0), size), Qt::white);
     PageLayout(content, scene, svg, &painter).run();
     painter.end();
-    return bytes;
+    return joinScriptRuns(bytes);
 }
 
 bool writeReviewPageSvg(const ReviewContent& content, const QString& path, QString* error)
