@@ -36,8 +36,16 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent)
     connect(runner_, &AnalysisRunner::sensitivitiesReady, this, &MainWindow::showSensitivities);
     connect(runner_, &AnalysisRunner::networkCleared, this, &MainWindow::showCleared);
     connect(runner_, &AnalysisRunner::busyChanged, this, [this](bool busy) {
+        // Said only if the analysis outlasts this turn of the event loop: one
+        // run inline is done before the window paints again, and the status
+        // line would be laid out twice per edit for nothing.
         if (busy)
-            setStatus(tr("Analysing…"), false);
+            QMetaObject::invokeMethod(
+                this, [this] {
+                    if (runner_->isBusy())
+                        setStatus(tr("Analysing…"), false);
+                },
+                Qt::QueuedConnection);
     });
     connect(corners_, &CornerTable::cornerSelected, this, &MainWindow::cornerSelected);
     connect(plot_, &BodePlotView::cornerClicked, corners_, &CornerTable::selectCorner);

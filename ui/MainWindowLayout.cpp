@@ -15,6 +15,7 @@
 #include <QDockWidget>
 #include <QFileInfo>
 #include <QLabel>
+#include <QScrollArea>
 #include <QSettings>
 #include <QSplitter>
 #include <QStatusBar>
@@ -73,12 +74,23 @@ void MainWindow::buildViews()
     timeConstants_ = new TimeConstantTable;
     auto* tauDock = new QDockWidget(tr("Time Constants"), this);
     tauDock->setObjectName(QStringLiteral("timeConstantDock"));
-    // The factored response sits under the list it is built from.
-    auto* tauPanel = new QWidget;
-    auto* tauLayout = new QVBoxLayout(tauPanel);
-    tauLayout->setContentsMargins(0, 0, 0, 0);
-    tauLayout->addWidget(timeConstants_, 1);
-    tauLayout->addWidget(timeConstants_->factoredLabel());
+    // The factored response sits under the list it is built from, in a
+    // scrolling pane of its own: it runs to a line per corner, and its text
+    // changes with every value edit; as a plain member of the dock's layout
+    // it squeezed the list to a row or two and laid the whole window out
+    // again on every step of a value drag.
+    auto* factoredPane = new QScrollArea;
+    factoredPane->setObjectName(QStringLiteral("factoredFormPane"));
+    factoredPane->setWidgetResizable(true);
+    factoredPane->setFrameShape(QFrame::NoFrame);
+    factoredPane->setWidget(timeConstants_->factoredLabel());
+    auto* tauPanel = new QSplitter(Qt::Vertical);
+    tauPanel->setObjectName(QStringLiteral("timeConstantSplitter"));
+    tauPanel->addWidget(timeConstants_);
+    tauPanel->addWidget(factoredPane);
+    tauPanel->setStretchFactor(0, 3);
+    tauPanel->setStretchFactor(1, 2);
+    tauPanel->setChildrenCollapsible(false);
     tauDock->setWidget(tauPanel);
     addDockWidget(Qt::BottomDockWidgetArea, tauDock);
     splitDockWidget(cornerDock, tauDock, Qt::Horizontal);

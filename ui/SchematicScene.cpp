@@ -203,20 +203,47 @@ DrawingSnapshot SchematicScene::snapshot() const
     return s;
 }
 
+bool SchematicScene::decorationsMatch(const Connectivity& c, const QList<DrawingProblem>& problems) const
+{
+    if (decorations_.size() != c.junctions.size() + problems.size())
+        return false;
+    for (qsizetype i = 0; i < c.junctions.size(); ++i) {
+        const auto* dot = qgraphicsitem_cast<const JunctionItem*>(decorations_[i]);
+        if (!dot || dot->pos() != QPointF(c.junctions[i]))
+            return false;
+    }
+    for (qsizetype i = 0; i < problems.size(); ++i) {
+        const auto* mark = qgraphicsitem_cast<const ProblemMarkerItem*>(decorations_[c.junctions.size() + i]);
+        const DrawingProblem& p = problems[i];
+        if (!mark || mark->problem().message != p.message || mark->problem().where != p.where
+            || mark->problem().parts != p.parts || mark->problem().minor != p.minor)
+            return false;
+    }
+    return true;
+}
+
 void SchematicScene::showDerived(const Connectivity& c, const QList<DrawingProblem>& problems)
 {
-    for (QGraphicsItem* d : decorations_)
-        delete d;
-    decorations_.clear();
-    for (const QPoint& p : c.junctions) {
-        auto* dot = new JunctionItem(p);
-        addItem(dot);
-        decorations_.push_back(dot);
-    }
-    for (const DrawingProblem& problem : problems) {
-        auto* mark = new ProblemMarkerItem(problem);
-        addItem(mark);
-        decorations_.push_back(mark);
+    // A value edit leaves the dots and marks where they were: new items
+    // would repaint the whole drawing (the view updates the rectangle
+    // around everything that changed) on every step of a value drag.
+    if (decorationsMatch(c, problems)) {
+        for (QGraphicsItem* d : decorations_)
+            d->show();  // hidden while a move was previewed
+    } else {
+        for (QGraphicsItem* d : decorations_)
+            delete d;
+        decorations_.clear();
+        for (const QPoint& p : c.junctions) {
+            auto* dot = new JunctionItem(p);
+            addItem(dot);
+            decorations_.push_back(dot);
+        }
+        for (const DrawingProblem& problem : problems) {
+            auto* mark = new ProblemMarkerItem(problem);
+            addItem(mark);
+            decorations_.push_back(mark);
+        }
     }
     QRectF used;
     for (const auto& [id, item] : items_) {

@@ -137,6 +137,8 @@ private:
                            ItemStates* before) const;
 
     void openEditor(const QRectF& at, const QString& text, std::function<QString(const QString&)> commit);
+    // True when the dots and problem marks shown are the ones given, in order.
+    bool decorationsMatch(const Connectivity& c, const QList<DrawingProblem>& problems) const;
 
     SchematicDocument* document_;
     Tool tool_ = Tool::Select;

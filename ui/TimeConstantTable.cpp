@@ -7,12 +7,100 @@
 #include <QApplication>
 #include <QClipboard>
 #include <QHeaderView>
-#include <QLabel>
 #include <QSet>
+
+#include <array>
+#include <optional>
+#include <string>
 
 #include <map>
 
 namespace tauline::ui {
+
+namespace {
+
+// A part's row. Its cells are held here and handed to the view when it
+// asks: a new analysis rewrites them without a dataChanged per cell (each
+// one made the view measure the row again), and the table repaints once.
+class ConstantRow : public QTreeWidgetItem {
+public:
+    explicit ConstantRow(QTreeWidget* parent) : QTreeWidgetItem(parent) {}
+
+    std::array<QString, TimeConstantTable::ColumnCount> cells;
+    bool hasExpressions = false;
+    QString expressionTip;
+
+    QVariant data(int column, int role) const override
+    {
+        using T = TimeConstantTable;
+        const bool inRange = column >= 0 && column < T::ColumnCount;
+        if (inRange && (role == Qt::DisplayRole || role == Qt::EditRole))
+            return cells[column];
+        if (role == Qt::ToolTipRole && column == T::TauColumn)
+            // The narrow dock may hide the expression columns: the τ cells say it too.
+            return hasExpressions ? T::tr("τ = %1 = %2").arg(cells[T::ExpressionColumn], cells[T::TauColumn])
+                                  : T::tr("%1's time constant with every other reactive part at its "
+                                          "zero-value state and the input zeroed")
+                                        .arg(cells[T::PartColumn]);
+        if (role == Qt::ToolTipRole && column == T::NullTauColumn)
+            return hasExpressions ? T::tr("τ nulled = %1 = %2")
+                                        .arg(cells[T::NullExpressionColumn], cells[T::NullTauColumn])
+                                  : T::tr("The same with the response nulled (for an impedance: "
+                                          "the port shorted)");
+        if (role == Qt::ToolTipRole && column == T::ExpressionColumn)
+            return expressionTip;
+        return QTreeWidgetItem::data(column, role);
+    }
+};
+
+// A second-order constant under its part's row: written out only when the
+// view asks, which it does only for a row that is expanded (n(n−1) of them,
+// mostly never looked at, yet all new on every value edit).
+class PairRow : public QTreeWidgetItem {
+public:
+    explicit PairRow(QTreeWidgetItem* parent) : QTreeWidgetItem(parent) {}
+
+    void setPair(const tauline::PairTimeConstant& pair)
+    {
+        if (shorted_ == pair.shorted && tau_ == pair.tau && r_ == pair.r)
+            return;
+        shorted_ = pair.shorted;
+        tau_ = pair.tau;
+        r_ = pair.r;
+        written_ = false;
+    }
+
+    QVariant data(int column, int role) const override
+    {
+        using T = TimeConstantTable;
+        if ((role == Qt::DisplayRole || role == Qt::EditRole)
+            && (column == T::PartColumn || column == T::TauColumn || column == T::ResistanceColumn)) {
+            if (!written_) {
+                text_ = {T::tr("with %1 shorted").arg(QString::fromStdString(shorted_)), secondsText(tau_),
+                         ohmsText(r_)};
+                written_ = true;
+            }
+            return text_[column == T::PartColumn ? 0 : column == T::TauColumn ? 1 : 2];
+        }
+        if (role == Qt::DisplayRole || role == Qt::EditRole)
+            return QString();
+        return QTreeWidgetItem::data(column, role);
+    }
+
+private:
+    std::string shorted_;
+    std::optional<double> tau_;
+    std::optional<double> r_;
+    mutable std::array<QString, 3> text_;
+    mutable bool written_ = false;
+};
+
+ConstantRow* constantRow(QTreeWidgetItem* item)
+{
+    return static_cast<ConstantRow*>(item);
+}
+
+}  // namespace
 
 TimeConstantTable::TimeConstantTable(QWidget* parent) : QTreeWidget(parent)
 {
@@ -37,12 +125,10 @@ TimeConstantTable::TimeConstantTable(QWidget* parent) : QTreeWidget(parent)
     setColumnWidth(NullResistanceColumn, 66);
     setColumnWidth(ExpressionColumn, 160);
 
-    factored_ = new QLabel;
-    factored_->setTextFormat(Qt::PlainText);
-    // Not mouse-selectable: a selectable label re-lays its text out as a
-    // document on every edit, which cost a third of the edit-to-redrawn
-    // time; Copy as Text (also on the label's own menu) copies it instead.
-    factored_->setWordWrap(true);
+    // Not mouse-selectable: selectable text is laid out again as a document
+    // on every edit, which cost a third of the edit-to-redrawn time; Copy as
+    // Text (also on the text's own menu) copies it instead.
+    factored_ = new FactoredFormText;
     factored_->setObjectName(QStringLiteral("factoredForm"));
 
     auto* copy = new QAction(tr("Copy as Text"), this);
@@ -63,27 +149,28 @@ TimeConstantTable::~TimeConstantTable()
 
 void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis, const tauline::Network& network)
 {
-    // Cells are set only to their new text, never blanked first: an
-    // unchanged cell then costs the view nothing while a value is dragged.
     updateRows(analysis);
     const auto& expressions = expressionsFor(analysis, network);
     const bool nullUndefined = analysis.kind != ResponseKind::Impedance && analysis.dc.kind != LimitKind::Finite;
+    bool changed = false;
     for (int i = 0; i < topLevelItemCount() && i < static_cast<int>(expressions.size()); ++i) {
-        QTreeWidgetItem* row = topLevelItem(i);
+        ConstantRow* row = constantRow(topLevelItem(i));
         const auto& e = expressions[i];
-        row->setText(ExpressionColumn, QString::fromStdString(e.tauText()));
-        row->setText(NullExpressionColumn, nullUndefined && !analysis.timeConstants[i].tauNull
-                                               ? kUndefinedText
-                                               : QString::fromStdString(e.nullTauText()));
-        // The narrow dock may hide the expression columns: the τ cells say it too.
-        row->setToolTip(TauColumn, tr("τ = %1 = %2").arg(row->text(ExpressionColumn), row->text(TauColumn)));
-        row->setToolTip(NullTauColumn,
-                        tr("τ nulled = %1 = %2").arg(row->text(NullExpressionColumn), row->text(NullTauColumn)));
+        const QString& nullText = nullUndefined && !analysis.timeConstants[i].tauNull ? kUndefinedText
+                                                                                      : expressionTexts_[i].second;
         const bool bridge = (e.seen && !e.seen->seriesParallel()) || (e.nulled && !e.nulled->seriesParallel());
-        row->setToolTip(ExpressionColumn, bridge ? tr("Not series–parallel: the bridge’s branches are reduced as "
-                                                      "far as they go; the value is exact")
-                                                 : QString());
+        const QString tip = bridge ? tr("Not series–parallel: the bridge’s branches are reduced as "
+                                        "far as they go; the value is exact")
+                                   : QString();
+        changed = changed || !row->hasExpressions || row->cells[ExpressionColumn] != expressionTexts_[i].first
+                  || row->cells[NullExpressionColumn] != nullText || row->expressionTip != tip;
+        row->hasExpressions = true;
+        row->cells[ExpressionColumn] = expressionTexts_[i].first;
+        row->cells[NullExpressionColumn] = nullText;
+        row->expressionTip = tip;
     }
+    if (changed)
+        viewport()->update();
     const FactoredForm form = factoredForm(analysis, expressions);
     factoredText_ = QString::fromStdString(form.text()).trimmed();
     if (factored_ && factored_->text() != factoredText_)
@@ -108,6 +195,10 @@ TimeConstantTable::expressionsFor(const tauline::Analysis& analysis, const tauli
     if (key != expressionKey_) {
         expressions_ = timeConstantExpressions(network, analysis);
         expressionKey_ = std::move(key);
+        expressionTexts_.clear();
+        for (const auto& e : expressions_)
+            expressionTexts_.emplace_back(QString::fromStdString(e.tauText()),
+                                          QString::fromStdString(e.nullTauText()));
     }
     return expressions_;
 }
@@ -148,9 +239,13 @@ void TimeConstantTable::setAnalysis(const tauline::Analysis& analysis)
     updateRows(analysis);
     // Part names need the network: the two-argument form fills these.
     for (int i = 0; i < topLevelItemCount(); ++i) {
-        topLevelItem(i)->setText(ExpressionColumn, QString());
-        topLevelItem(i)->setText(NullExpressionColumn, QString());
+        ConstantRow* row = constantRow(topLevelItem(i));
+        row->hasExpressions = false;
+        row->cells[ExpressionColumn].clear();
+        row->cells[NullExpressionColumn].clear();
+        row->expressionTip.clear();
     }
+    viewport()->update();
     factoredText_.clear();
     if (factored_)
         factored_->clear();
@@ -190,18 +285,13 @@ void TimeConstantTable::updateRows(const tauline::Analysis& analysis)
                 expanded.insert(topLevelItem(i)->text(PartColumn));
         clear();
         for (const auto& tc : analysis.timeConstants) {
-            auto* row = new QTreeWidgetItem(this);
+            auto* row = new ConstantRow(this);
             const QString name = QString::fromStdString(tc.element);
-            row->setText(PartColumn, name);
+            row->cells[PartColumn] = name;
             for (int c = TauColumn; c <= NullResistanceColumn; ++c)
                 row->setTextAlignment(c, right);
-            row->setToolTip(TauColumn, tr("%1's time constant with every other reactive part at its "
-                                          "zero-value state and the input zeroed")
-                                           .arg(name));
-            row->setToolTip(NullTauColumn, tr("The same with the response nulled (for an impedance: "
-                                              "the port shorted)"));
             for (std::size_t k = 0; k < pairs[tc.element].size(); ++k) {
-                auto* child = new QTreeWidgetItem(row);
+                auto* child = new PairRow(row);
                 child->setTextAlignment(TauColumn, right);
                 child->setTextAlignment(ResistanceColumn, right);
                 child->setForeground(PartColumn, QColor(0x60, 0x66, 0x70));
@@ -211,21 +301,24 @@ void TimeConstantTable::updateRows(const tauline::Analysis& analysis)
     }
 
     for (int i = 0; i < topLevelItemCount(); ++i) {
-        QTreeWidgetItem* row = topLevelItem(i);
+        ConstantRow* row = constantRow(topLevelItem(i));
         const auto& tc = analysis.timeConstants[i];
-        row->setText(TauColumn, secondsText(tc.tau));
-        row->setText(ResistanceColumn, ohmsText(tc.r));
-        row->setText(NullTauColumn, nullText(tc.tauNull, true));
-        row->setText(NullResistanceColumn, nullText(tc.rNull, false));
+        row->cells[TauColumn] = secondsText(tc.tau);
+        row->cells[ResistanceColumn] = ohmsText(tc.r);
+        row->cells[NullTauColumn] = nullText(tc.tauNull, true);
+        row->cells[NullResistanceColumn] = nullText(tc.rNull, false);
         const auto& children = pairs[tc.element];
-        for (int k = 0; k < row->childCount(); ++k) {
-            QTreeWidgetItem* child = row->child(k);
-            const tauline::PairTimeConstant& pair = *children[k];
-            child->setText(PartColumn, tr("with %1 shorted").arg(QString::fromStdString(pair.shorted)));
-            child->setText(TauColumn, secondsText(pair.tau));
-            child->setText(ResistanceColumn, ohmsText(pair.r));
-        }
+        for (int k = 0; k < row->childCount(); ++k)
+            static_cast<PairRow*>(row->child(k))->setPair(*children[k]);
     }
+    // Only the number columns change with a value: the names and part-name
+    // expressions beside them are not painted again.
+    QRect numbers;
+    for (int c = TauColumn; c <= NullResistanceColumn; ++c)
+        if (!header()->isSectionHidden(c))
+            numbers |= QRect(header()->sectionViewportPosition(c), 0, header()->sectionSize(c),
+                             viewport()->height());
+    viewport()->update(numbers);
 }
 
 void TimeConstantTable::clearConstants()

@@ -4,9 +4,13 @@
 #include "Network.h"
 #include "ResistanceExpressions.h"
 
-#include <QLabel>
+#include "FactoredFormText.h"
+
 #include <QPointer>
 #include <QTreeWidget>
+
+#include <utility>
+#include <vector>
 
 
 namespace tauline::ui {
@@ -34,7 +38,7 @@ public:
 
     // The factored response, for the window to place under the list; the
     // table keeps it up to date (and deletes it if nobody placed it).
-    QLabel* factoredLabel() const { return factored_; }
+    FactoredFormText* factoredLabel() const { return factored_; }
     // The list and the factored form as tab-separated plain text.
     QString plainText() const;
     void copyAsText() const;
@@ -49,7 +53,9 @@ private:
                                                                       const tauline::Network& network);
     std::string expressionKey_;
     std::vector<tauline::TimeConstantExpression> expressions_;
-    QPointer<QLabel> factored_;
+    // Each expression's τ and τ-nulled text, written once per shape.
+    std::vector<std::pair<QString, QString>> expressionTexts_;
+    QPointer<FactoredFormText> factored_;
     QString factoredText_;
 };
 

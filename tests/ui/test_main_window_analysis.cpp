@@ -8,11 +8,15 @@
 #include "MainWindow.h"
 #include "NetworkFile.h"
 #include "PartItem.h"
+#include "QuantityText.h"
 #include "SchematicDocument.h"
 #include "SchematicScene.h"
 #include "TimeConstantTable.h"
 
+#include <QImage>
 #include <QLabel>
+#include <QPixmap>
+#include <QScreen>
 #include <QLineEdit>
 #include <QStandardPaths>
 #include <QTest>
@@ -215,4 +219,56 @@ TEST_CASE("The caution banner shows for mains and snubber networks", "[main-wind
     window.document()->loadNetwork(network, nullptr);
     CHECK(window.cautionBanner()->isVisibleTo(&window));
     CHECK(window.cautionBanner()->text().contains(QStringLiteral("no voltage or power rating")));
+}
+
+TEST_CASE("After a value edit the screen matches the window painted afresh", "[main-window][repaint]")
+{
+    // The views repaint only what an edit changed (the canvas around the
+    // edited part, the plot, the number cells): nothing left stale may show.
+    TestSettings settings;
+    MainWindow window;
+    window.resize(1280, 800);
+    REQUIRE(window.openFile(QString::fromLatin1(kSample)));
+    window.show();
+    REQUIRE(QTest::qWaitForWindowExposed(&window));
+    REQUIRE(settle(window, true));
+    // One part's second-order constants open, so they are on screen too.
+    TimeConstantTable* constants = window.timeConstantTable();
+    REQUIRE(constants->topLevelItemCount() > 0);
+    constants->topLevelItem(0)->setExpanded(true);
+
+    auto screenMatches = [&window] {
+        QTest::qWait(50);
+        const QImage onScreen = window.screen()->grabWindow(window.winId()).toImage().convertToFormat(QImage::Format_RGB32);
+        const QImage fresh = window.grab().toImage().convertToFormat(QImage::Format_RGB32);
+        return !onScreen.isNull() && onScreen == fresh;
+    };
+    CHECK(screenMatches());
+    const QString factoredBefore = constants->factoredLabel()->text();
+    for (double value : {22e3, 100e3}) {
+        window.document()->setPartValue(QStringLiteral("R2"), value, QString());
+        REQUIRE(settle(window));
+        CHECK(screenMatches());
+        REQUIRE(settle(window, true));
+        CHECK(screenMatches());
+    }
+    // The open part's second-order constants follow the edit.
+    const auto network = withValue(tauline::readNetworkFile(kSample).network, "R2", 100e3);
+    const tauline::Analysis a = tauline::analyze(network);
+    const QTreeWidgetItem* row = constants->topLevelItem(0);
+    std::vector<const tauline::PairTimeConstant*> pairs;
+    for (const auto& pair : a.pairTimeConstants)
+        if (pair.element == a.timeConstants[0].element)
+            pairs.push_back(&pair);
+    REQUIRE(row->childCount() == static_cast<int>(pairs.size()));
+    for (int k = 0; k < row->childCount(); ++k) {
+        CHECK(row->child(k)->text(TimeConstantTable::PartColumn).contains(QString::fromStdString(pairs[k]->shorted)));
+        CHECK(row->child(k)->text(TimeConstantTable::TauColumn) == secondsText(pairs[k]->tau));
+        CHECK(row->child(k)->text(TimeConstantTable::ResistanceColumn) == ohmsText(pairs[k]->r));
+    }
+    // The factored form follows too, all of it within its scrolling pane.
+    FactoredFormText* factored = constants->factoredLabel();
+    CHECK(factored->text() != factoredBefore);
+    CHECK(factored->text().startsWith(QStringLiteral("H(s) = ")));
+    CHECK(factored->height() >= factored->heightForWidth(factored->width()));
 }
