@@ -8,6 +8,7 @@
 #include <cmath>
 #include <filesystem>
 #include <fstream>
+#include <unistd.h>
 
 namespace {
 
@@ -23,7 +24,9 @@ const char* kTwoSections = R"({"format": "tauline-network", "version": 1, "title
 
 std::string analyzeFile(const std::string& text, bool json)
 {
-    const auto path = std::filesystem::temp_directory_path() / "tauline-expression-output.tauline";
+    // One name per process: ctest runs this file's cases side by side.
+    const auto path = std::filesystem::temp_directory_path() /
+                      ("tauline-expression-output-" + std::to_string(::getpid()) + ".tauline");
     std::ofstream(path) << text;
     std::vector<std::string> arguments{"analyze", path.string()};
     if (json)
