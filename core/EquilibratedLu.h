@@ -80,6 +80,18 @@ public:
         return x;
     }
 
+    // Aᵀ·y = rhs with the same factors, unrefined: for the left vectors of
+    // a root's two-sided Rayleigh quotient, which needs a direction only.
+    Matrix solveTransposed(const Matrix& rhs) const
+    {
+        const Matrix scaled = colScale_.asDiagonal() * rhs;
+        Matrix y = lu_.transpose().solve(scaled);
+        return rowScale_.asDiagonal() * y;
+    }
+
+    // The matrix in extended precision, as given.
+    const ExtendedMatrix& extended() const { return aExt_; }
+
     // The residual rhs − A·x in extended precision, for callers that keep
     // the last correction apart from x.
     ExtendedMatrix residual(const Matrix& rhs, const Matrix& x) const

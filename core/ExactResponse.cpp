@@ -235,7 +235,14 @@ ExactResponse solveExact(const NodalModel& model)
         sourceEdge.push_back({model.inputNodes[0], model.inputNodes[1]});
 
     // At the origin: one pole per piece with no DC path to the reference.
-    PencilRootProblem poles{anchored.G, anchored.extendedG, anchored.ports, model.capacitance, true, low, high};
+    PencilRootProblem poles;
+    poles.a0 = anchored.G;
+    poles.a0Extended = anchored.extendedG;
+    poles.ports = anchored.ports;
+    poles.capacitance = model.capacitance;
+    poles.symmetric = true;
+    poles.lowRate = low;
+    poles.highRate = high;
     out.rawPoles = finitePencilRoots(poles, floatingComponents(dcComponents(model, sourceEdge))).roots;
 
     // At the origin: an impedance's zeros are the port-shorted network's
@@ -245,7 +252,12 @@ ExactResponse solveExact(const NodalModel& model)
         const int count = floatingComponents(dcComponents(model, {{model.inputNodes[0], model.inputNodes[1]}}));
         out.rawZeros = finitePencilRoots(zeros, count).roots;
     } else {
-        out.rawZeros = finitePencilRoots(zeros, originMultiplicity(zeros)).roots;
+        // The roots are found on the pencil as it is (deflation leaves
+        // rounding where the degree drops, and spurious far roots came of
+        // it) and refined on the deflated one.
+        const OriginDeflation origin = deflateOrigin(zeros);
+        out.rawZeros = origin.removed > 0 ? finitePencilRoots(zeros, origin.bounds, origin.deflated).roots
+                                          : finitePencilRoots(zeros, origin.bounds).roots;
     }
 
     const double s1 = geometricMeanMagnitude(out.rawPoles, out.rawZeros, std::sqrt(low * high));

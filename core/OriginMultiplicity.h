@@ -19,4 +19,21 @@ namespace tauline {
 // passes' rounding overlaps slow non-zero roots, see the .cpp).
 OriginRootBounds originMultiplicity(const PencilRootProblem& problem);
 
+// The same bounds, and the pencil with the certain origin roots taken out:
+// the passes above carried out in extended precision on A0 and on the
+// factors of the reactive part (L·diag(cap)·Pᵀ stays of that form, rows and
+// columns only being rotated and scaled), so that
+// det(A0' + s·B') = const · det(A0 + s·B) / s^removed. Its dc matrix is
+// regular to the rank test, so a slow root refined on it is no longer
+// spoilt by a multiple origin root's Jordan chain. Its degree drop is exact
+// to rounding only (spurious far roots can appear), so roots are found on
+// the original pencil and refined on this one. `deflated` is empty when
+// nothing is removed.
+struct OriginDeflation {
+    OriginRootBounds bounds;
+    int removed = 0;
+    PencilRootProblem deflated;
+};
+OriginDeflation deflateOrigin(const PencilRootProblem& problem);
+
 }  // namespace tauline
