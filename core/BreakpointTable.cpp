@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <cstdio>
 #include <numbers>
 
 namespace tauline {
@@ -59,6 +60,15 @@ std::vector<Breakpoint> breakpointTable(const std::vector<cd>& poles, const std:
     addCorners(out, RootType::Zero, zeros, numerator);
     std::stable_sort(out.begin(), out.end(), [](const Breakpoint& x, const Breakpoint& y) { return x.hz < y.hz; });
     return out;
+}
+
+std::string qualityFactorText(double q)
+{
+    if (!std::isfinite(q))
+        return "\u221E";
+    char buffer[32];
+    std::snprintf(buffer, sizeof buffer, "%.3g", q);
+    return buffer;
 }
 
 }  // namespace tauline

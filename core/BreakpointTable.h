@@ -3,6 +3,7 @@
 #include "Analysis.h"
 
 #include <complex>
+#include <string>
 #include <vector>
 
 namespace tauline {
@@ -18,6 +19,10 @@ std::vector<Breakpoint> breakpointTable(const std::vector<std::complex<double>>&
                                         const std::vector<std::complex<double>>& zeros,
                                         const std::vector<double>& numerator,
                                         const std::vector<double>& denominator);
+
+// A pair's Q as people read it: three significant digits, "∞" for a pair
+// on the jω axis (an ideal notch's zeros).
+std::string qualityFactorText(double q);
 
 // Estimates flagged as poor past this relative error.
 inline constexpr double kPoorEstimate = 0.10;

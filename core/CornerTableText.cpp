@@ -1,5 +1,6 @@
 #include "CornerTableText.h"
 
+#include "BreakpointTable.h"
 #include "ValueParser.h"
 
 #include <cmath>
@@ -40,9 +41,7 @@ std::string typeText(const Breakpoint& corner)
     const bool pole = corner.type == RootType::Pole;
     if (!corner.q)
         return pole ? "pole" : "zero";
-    char q[32];
-    std::snprintf(q, sizeof q, "%.3g", *corner.q);
-    return std::string(pole ? "pole pair, Q " : "zero pair, Q ") + q;
+    return std::string(pole ? "pole pair, Q " : "zero pair, Q ") + qualityFactorText(*corner.q);
 }
 
 std::string setByText(const CornerSensitivity& corner)

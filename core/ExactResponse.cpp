@@ -152,6 +152,18 @@ void cancelCommonRoots(std::vector<cd>& poles, std::vector<cd>& zeros)
     zeros = std::move(keptZeros);
 }
 
+// A complex root whose real part is below what double precision resolves
+// beside its size lies on the jω axis (an ideal notch's zeros): Q is
+// infinite, not 1e15, and the polynomial's odd terms are exactly zero.
+// Roots are accurate to ~1e-15 of their size; a real damping of 1e-13 of
+// it (Q = 5e12) no physical network resolves.
+void snapToImaginaryAxis(std::vector<cd>& roots)
+{
+    for (cd& r : roots)
+        if (r.imag() != 0.0 && std::abs(r.real()) <= 1e-13 * std::abs(r))
+            r = cd(0.0, r.imag());
+}
+
 }  // namespace
 
 double lowestRate(const NodalModel& model)
@@ -259,6 +271,9 @@ ExactResponse solveExact(const NodalModel& model)
         out.rawZeros = origin.removed > 0 ? finitePencilRoots(zeros, origin.bounds, origin.deflated).roots
                                           : finitePencilRoots(zeros, origin.bounds).roots;
     }
+
+    snapToImaginaryAxis(out.rawPoles);
+    snapToImaginaryAxis(out.rawZeros);
 
     const double s1 = geometricMeanMagnitude(out.rawPoles, out.rawZeros, std::sqrt(low * high));
     const std::vector<Evaluation> points = gainEvaluations(model, s1);

@@ -1,5 +1,6 @@
 #include "BodeChart.h"
 
+#include "BreakpointTable.h"
 #include "PolylineClip.h"
 #include "QuantityText.h"
 #include "ReferenceCurve.h"
@@ -528,7 +529,7 @@ void BodeChart::placeCornerLabels()
         const auto& corner = analysis_->breakpoints[index];
         QString text = frequencyText(corner.hz);
         if (corner.q)
-            text += QStringLiteral("  Q %1").arg(*corner.q, 0, 'g', 3);
+            text += QStringLiteral("  Q %1").arg(QString::fromStdString(qualityFactorText(*corner.q)));
         QGraphicsSimpleTextItem* item = labels_[static_cast<qsizetype>(m)];
         item->setText(text);
         QFont itemFont = font;

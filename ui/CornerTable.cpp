@@ -1,5 +1,6 @@
 #include "CornerTable.h"
 
+#include "BreakpointTable.h"
 #include "LowQPair.h"
 #include "QuantityText.h"
 
@@ -25,7 +26,7 @@ QString typeText(const tauline::Breakpoint& corner)
     const bool pole = corner.type == tauline::RootType::Pole;
     if (corner.q)
         return (pole ? QObject::tr("pole pair, Q %1") : QObject::tr("zero pair, Q %1"))
-            .arg(*corner.q, 0, 'g', 3);
+            .arg(QString::fromStdString(tauline::qualityFactorText(*corner.q)));
     return pole ? QObject::tr("pole") : QObject::tr("zero");
 }
 

@@ -110,8 +110,12 @@ ordered_json breakpointsJson(const Analysis& a)
         entry["estimate_hz"] = bp.estimateHz;
         entry["estimate_error"] = bp.estimateError;
         entry["poorly_separated"] = bp.poorlySeparated;
-        if (bp.q)
-            entry["q"] = *bp.q;
+        if (bp.q) {
+            // A pair on the jω axis (an ideal notch's zeros) has no damping.
+            entry["q"] = std::isfinite(*bp.q) ? ordered_json(*bp.q) : ordered_json(nullptr);
+            if (!std::isfinite(*bp.q))
+                entry["q_limit"] = "infinite";
+        }
         entry["root"] = {{"re", bp.root.real()}, {"im", bp.root.imag()}};
         out.push_back(entry);
     }

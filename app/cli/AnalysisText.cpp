@@ -1,5 +1,6 @@
 #include "AnalysisText.h"
 
+#include "BreakpointTable.h"
 #include "FactoredForm.h"
 #include "HazardCaution.h"
 #include "LowQPair.h"
@@ -59,10 +60,11 @@ std::string describeLimit(const ResponseLimit& limit, ResponseKind kind, const c
 
 std::string rootText(std::complex<double> root)
 {
-    std::string text = formatEngineering(root.real(), kDigits);
-    if (root.imag() != 0.0)
-        text += " \u00B1 j" + formatEngineering(std::fabs(root.imag()), kDigits);
-    return text + " rad/s";
+    if (root.imag() == 0.0)
+        return formatEngineering(root.real(), kDigits) + " rad/s";
+    const std::string imaginary = "\u00B1 j" + formatEngineering(std::fabs(root.imag()), kDigits) + " rad/s";
+    // A pair on the jω axis reads as such, not as "0 ± j…".
+    return root.real() == 0.0 ? imaginary : formatEngineering(root.real(), kDigits) + " " + imaginary;
 }
 
 // A complex pair is shown once, as re ± j·im.
@@ -208,7 +210,7 @@ void writeBreakpoints(std::ostream& out, const Analysis& a)
     for (const auto& bp : a.breakpoints) {
         const std::string error = signedPercent(bp.estimateError);
         table.addRow({bp.type == RootType::Pole ? "pole" : "zero", formatQuantity(bp.hz, "Hz", kDigits),
-                      formatQuantity(bp.estimateHz, "Hz", kDigits), error, bp.q ? fixedPoint(*bp.q, 3) : "",
+                      formatQuantity(bp.estimateHz, "Hz", kDigits), error, bp.q ? qualityFactorText(*bp.q) : "",
                       bp.poorlySeparated ? "*" : ""});
         anyPoor = anyPoor || bp.poorlySeparated;
     }

@@ -38,8 +38,9 @@ def load(path):
     return net
 
 
-def check_folder(folder):
-    """Every .tauline file in `folder` against its exact reference."""
+def check_folder(folder, extra=None):
+    """Every .tauline file in `folder` against its exact reference;
+    `extra(case, got, ref)` adds checks of its own."""
     binary, save = tr.binary_from_argv()
     tally = tr.Tally(save)
     mpmath.mp.dps = 40
@@ -53,6 +54,8 @@ def check_folder(folder):
         notes = []
         if case.check(got is not None, str(problem)):
             tst.compare(case, got, ref, net, notes)
+            if extra:
+                extra(case, got, ref)
         tally.record(case)
     tally.finish(minimum_passed=len(names))
 
