@@ -29,6 +29,7 @@ public:
     // that near-cancelling responses rest on.
     EquilibratedLu(const Matrix& a, ExtendedMatrix exact) : aExt_(std::move(exact))
     {
+        collectEntries();
         rowScale_ = a.cwiseAbs().rowwise().maxCoeff().cwiseInverse();
         const Matrix rowScaled = rowScale_.asDiagonal() * a;
         colScale_ = rowScaled.cwiseAbs().colwise().maxCoeff().transpose().cwiseInverse();
@@ -65,7 +66,7 @@ public:
         Eigen::VectorXd previous = x.colwise().norm().transpose();
         std::vector<bool> converging(x.cols(), true);
         for (int step = 0; step < refinements; ++step) {
-            const ExtendedMatrix residual = rhs.template cast<Extended>() - aExt_ * x.template cast<Extended>();
+            const ExtendedMatrix residual = this->residual(rhs, x);
             const Matrix correction = once(residual.template cast<Scalar>());
             for (int j = 0; j < x.cols(); ++j) {
                 const double size = correction.col(j).norm();
@@ -96,11 +97,42 @@ public:
     // the last correction apart from x.
     ExtendedMatrix residual(const Matrix& rhs, const Matrix& x) const
     {
-        return rhs.template cast<Extended>() - aExt_ * x.template cast<Extended>();
+        if (!sparse_)
+            return rhs.template cast<Extended>() - aExt_ * x.template cast<Extended>();
+        // A nodal matrix has a few entries per row: a dense long-double
+        // product (no vector unit for it) would spend n² per column on
+        // zeros.
+        ExtendedMatrix out = rhs.template cast<Extended>();
+        for (const Entry& e : entries_)
+            for (Eigen::Index j = 0; j < x.cols(); ++j)
+                out(e.row, j) -= e.value * Extended(x(e.col, j));
+        return out;
     }
 
 private:
+    struct Entry {
+        Eigen::Index row;
+        Eigen::Index col;
+        Extended value;
+    };
+
+    // The non-zero entries, where they are few enough to pay.
+    void collectEntries()
+    {
+        const Eigen::Index n = aExt_.rows() * aExt_.cols();
+        std::vector<Entry> entries;
+        for (Eigen::Index j = 0; j < aExt_.cols(); ++j)
+            for (Eigen::Index i = 0; i < aExt_.rows(); ++i)
+                if (aExt_(i, j) != Extended(0))
+                    entries.push_back({i, j, aExt_(i, j)});
+        sparse_ = static_cast<Eigen::Index>(entries.size()) * 4 < n;
+        if (sparse_)
+            entries_ = std::move(entries);
+    }
+
     ExtendedMatrix aExt_;
+    std::vector<Entry> entries_;
+    bool sparse_ = false;
     Eigen::VectorXd rowScale_;
     Eigen::VectorXd colScale_;
     Eigen::PartialPivLU<Matrix> lu_;

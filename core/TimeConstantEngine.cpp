@@ -168,7 +168,9 @@ PortResistance portResistance(const NodalModel& model, Eigen::MatrixXd m, const 
     const int n = model.capacitorCount();
     Eigen::MatrixXd p = Eigen::MatrixXd::Zero(m.rows(), n);
     p.topRows(model.unknowns()) = model.ports;
-    const Eigen::MatrixXd x = lu.solve(p);
+    // Unrefined: portVoltages refines against KCL in double-double, which
+    // the long-double steps of solve() would only repeat less exactly.
+    const Eigen::MatrixXd x = lu.solve(p, 0);
     out.rExtended = portVoltages(model, m, labels, lu, p, x);
     out.r = out.rExtended.cast<double>();
     out.finite.resize(n);
