@@ -202,10 +202,7 @@ ExactResponse solveExact(const NodalModel& model)
     // The zeros' pencil: the nodal matrix bordered by input and output.
     const int n = model.unknowns();
     PencilRootProblem zeros;
-    zeros.a0 = Eigen::MatrixXd::Zero(n + 1, n + 1);
-    zeros.a0.topLeftCorner(n, n) = anchored.G;
-    zeros.a0.block(0, n, n, 1) = anchored.b;
-    zeros.a0.block(n, 0, 1, n) = anchored.c.transpose();
+    zeros.a0 = borderedByResponse(anchored);
     zeros.a0Extended = zeros.a0.cast<long double>();
     zeros.a0Extended.topLeftCorner(n, n) = anchored.extendedG;
     zeros.ports = Eigen::MatrixXd::Zero(n + 1, model.capacitorCount());

@@ -310,4 +310,14 @@ NodalModel anchorFloatingPieces(const NodalModel& model)
     return out;
 }
 
+Eigen::MatrixXd borderedByResponse(const NodalModel& model)
+{
+    const int n = model.unknowns();
+    Eigen::MatrixXd out = Eigen::MatrixXd::Zero(n + 1, n + 1);
+    out.topLeftCorner(n, n) = model.G;
+    out.block(0, n, n, 1) = model.b;
+    out.block(n, 0, 1, n) = model.c.transpose();
+    return out;
+}
+
 }  // namespace tauline

@@ -79,4 +79,9 @@ std::vector<int> dcComponents(const NodalModel& model, const std::vector<NodalMo
 // relative on some networks).
 NodalModel anchorFloatingPieces(const NodalModel& model);
 
+// G bordered by the input column b and the output row cᵀ: with C in the
+// same corner it is the zeros' pencil, singular exactly where the response
+// is zero (the output held at 0 V, the input free).
+Eigen::MatrixXd borderedByResponse(const NodalModel& model);
+
 }  // namespace tauline

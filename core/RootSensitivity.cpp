@@ -25,10 +25,7 @@ Pencil pencilFor(const NodalModel& model, RootType type)
     // zero while the input is free.
     const int n = model.unknowns();
     Pencil p;
-    p.a0 = Eigen::MatrixXd::Zero(n + 1, n + 1);
-    p.a0.topLeftCorner(n, n) = model.G;
-    p.a0.block(0, n, n, 1) = model.b;
-    p.a0.block(n, 0, 1, n) = model.c.transpose();
+    p.a0 = borderedByResponse(model);
     p.a1 = Eigen::MatrixXd::Zero(n + 1, n + 1);
     p.a1.topLeftCorner(n, n) = model.C;
     return p;

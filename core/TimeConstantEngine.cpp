@@ -228,7 +228,7 @@ TimeConstantEngine::TimeConstantEngine(const NodalModel& model, const ExactRespo
     if (model.kind == ResponseKind::Impedance) {
         // Nulling an impedance's response shorts its port.
         const std::vector<int> labels = dcComponents(model, {{model.inputNodes[0], model.inputNodes[1]}});
-        nulled_ = portResistance(model, bordered(model.G, model.b, model.c), labels);
+        nulled_ = portResistance(model, borderedByResponse(model), labels);
     } else if (dcValue_) {
         // Null double injection: the input is free, the output held at zero.
         // It is regular when every floating component stays clear of the
@@ -237,7 +237,7 @@ TimeConstantEngine::TimeConstantEngine(const NodalModel& model, const ExactRespo
         for (const auto& w : floatingVectors(openLabels, model.unknowns()))
             clear = clear && std::abs(w.dot(model.b)) < 1e-12 && std::abs(w.dot(model.c)) < 1e-12;
         if (clear)
-            nulled_ = portResistance(model, bordered(model.G, model.b, model.c), openLabels);
+            nulled_ = portResistance(model, borderedByResponse(model), openLabels);
     }
 }
 

@@ -102,10 +102,7 @@ TEST_CASE("deflating an origin zero keeps the other roots of the bordered pencil
                                                   "in", "out"));
     const int n = m.unknowns();
     PencilRootProblem zeros;
-    zeros.a0 = Eigen::MatrixXd::Zero(n + 1, n + 1);
-    zeros.a0.topLeftCorner(n, n) = m.G;
-    zeros.a0.block(0, n, n, 1) = m.b;
-    zeros.a0.block(n, 0, 1, n) = m.c.transpose();
+    zeros.a0 = borderedByResponse(m);
     zeros.ports = Eigen::MatrixXd::Zero(n + 1, m.capacitorCount());
     zeros.ports.topRows(n) = m.ports;
     zeros.capacitance = m.capacitance;
