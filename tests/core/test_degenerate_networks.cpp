@@ -5,10 +5,13 @@
 #include "EngineTestNetworks.h"
 #include "Errors.h"
 #include "ExactResponse.h"
+#include "NetworkFile.h"
 #include "NodalModel.h"
 #include "TimeConstantEngine.h"
 
 #include <catch2/catch.hpp>
+
+#include <string>
 
 using namespace tauline;
 using namespace tauline::testing;
@@ -176,19 +179,9 @@ TEST_CASE("a port the nulling nearly shorts keeps its null resistance's digits",
     // sympy_network.py, _port_view 'nulled'; Meurer et al., SymPy, PeerJ
     // Computer Science 3:e103, 2017). The network is generated (reference
     // seed 61594), not a design.
-    Network net = transfer(ResponseKind::Transimpedance,
-                           {part("C1", 120e-9, "n2", "n7"), part("R1", 3.7, "n5", "n7"),
-                            part("C2", 460e-9, "n1", "n7"), part("C3", 55e-9, "n2", "n3"),
-                            part("R2", 52e3, kGroundNode, "n5"), part("C4", 2.4e-7, "n4", "n3"),
-                            part("R3", 8.7, "n7", "n6"), part("R4", 36.9, "n6", "n3"),
-                            part("R5", 2.6e6, kGroundNode, "n4"), part("R6", 33.7e3, "n6", "n1"),
-                            part("R7", 143e4, "n3", "n5"), part("R8", 270e3, "n3", "n1"),
-                            part("R9", 7.1e6, "n2", kGroundNode), part("C5", 33e-9, "n2", "n3"),
-                            part("C6", 3.98e-8, "n7", "n2"), part("C7", 55e-9, "n3", "n6"),
-                            part("R10", 368e3, kGroundNode, "n4"), part("C8", 16e-9, "n4", "n7"),
-                            part("C9", 1.3e-6, "n4", "n7"), part("C10", 58e-6, "n7", kGroundNode)},
-                           "n5", "n1");
-    net.response.output = {"n1", "n2"};
+    // The same file the SymPy reference reads (test_wide_values.py).
+    const Network net =
+        readNetworkFile(std::string(TAULINE_WIDE_NETWORKS_DIR) + "/wide-61594-plain-transimpedance.tauline").network;
     const NodalModel model = buildNodalModel(net);
     const TimeConstantEngine engine(model, solveExact(model));
     const double exact = 4792783937.0 / 144786246622520.0;

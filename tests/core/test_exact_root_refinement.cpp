@@ -22,11 +22,6 @@ namespace {
 
 using cd = std::complex<double>;
 
-NodalModel modelFromText(const std::string& text)
-{
-    return buildNodalModel(parseNetworkText(text, "test network").network);
-}
-
 // Each wanted root has a computed one within `tol` relative (counts equal).
 void checkRoots(std::vector<cd> got, std::vector<double> want, double tol)
 {
@@ -41,25 +36,13 @@ void checkRoots(std::vector<cd> got, std::vector<double> want, double tol)
 }
 
 // Seed 61595 of the wide stress run (no gnd, transimpedance); its zero at
-// 4.7e5 rad/s came out 4.7e-9 off.
-const char* const kNoGroundTransimpedance = R"({
-  "format": "tauline-network", "version": 1,
-  "parts": [
-    {"name": "R1", "kind": "resistor", "value": "63k", "nodes": ["n6", "n5"]},
-    {"name": "C1", "kind": "capacitor", "value": "0.0000000047", "nodes": ["n3", "n6"]},
-    {"name": "C2", "kind": "capacitor", "value": "25.2µF", "nodes": ["n2", "n3"]},
-    {"name": "R2", "kind": "resistor", "value": "5", "nodes": ["n2", "n4"]},
-    {"name": "R3", "kind": "resistor", "value": "220K", "nodes": ["n3", "n1"]},
-    {"name": "C3", "kind": "capacitor", "value": "890n", "nodes": ["n2", "n4"]},
-    {"name": "C4", "kind": "capacitor", "value": "220 nF", "nodes": ["n6", "n2"]},
-    {"name": "C5", "kind": "capacitor", "value": "0.00000000014", "nodes": ["n4", "n6"]},
-    {"name": "R4", "kind": "resistor", "value": "66", "nodes": ["n4", "n5"]},
-    {"name": "R5", "kind": "resistor", "value": "3.9 KΩ", "nodes": ["n4", "n6"]},
-    {"name": "R6", "kind": "resistor", "value": "38e3", "nodes": ["n4", "n3"]},
-    {"name": "C6", "kind": "capacitor", "value": "0.000019", "nodes": ["n3", "n6"]}
-  ],
-  "response": {"kind": "transimpedance", "input": ["n2", "n1"], "output": ["n5", "n2"]}
-})";
+// 4.7e5 rad/s came out 4.7e-9 off. The same file the SymPy reference reads
+// (test_wide_values.py).
+NodalModel noGroundTransimpedance()
+{
+    return buildNodalModel(
+        readNetworkFile(std::string(TAULINE_WIDE_NETWORKS_DIR) + "/wide-61595-no-gnd-transimpedance.tauline").network);
+}
 
 // det of the bordered pencil [G + sC, b; cᵀ, 0] of a model.
 cd borderedDeterminant(const NodalModel& m, cd s)
@@ -86,7 +69,7 @@ TEST_CASE("a zero of a wide-valued transimpedance is refined to 1e-9", "[exact][
     // SymPy reference: exact rational nodal analysis (Meurer et al., SymPy:
     // symbolic computing in Python, PeerJ Computer Science 3:e103, 2017) via
     // tests/reference/sympy_network.py on this network, roots at 40 digits.
-    const ExactResponse exact = solveExact(modelFromText(kNoGroundTransimpedance));
+    const ExactResponse exact = solveExact(noGroundTransimpedance());
     checkRoots(exact.zeros, {-474321.67117651878348, -0.74186201508757233826}, 1e-9);
 }
 
